@@ -1,0 +1,83 @@
+import express from 'express';
+import helmet from 'helmet';
+import type { Knex } from 'knex';
+import type pg from 'pg';
+import type { Logger } from 'pino';
+import { pinoHttp } from 'pino-http';
+import { csrfSync } from 'csrf-sync';
+import type { Env } from './env';
+import type { Mailer } from './mail/mailer';
+import { createSessionMiddleware } from './auth/session';
+import { createPassport } from './auth/google';
+import { loadActor } from './middleware/load-actor';
+import { apiNotFound, errorHandler } from './middleware/error-handler';
+import { publicAccess } from './middleware/access';
+import { createSignInLimits } from './middleware/rate-limit';
+import { createAuthService } from './features/auth/auth.service';
+import { authRoutes } from './features/auth/auth.routes';
+import { meRoutes } from './features/me/me.routes';
+import { createClassesService } from './features/classes/classes.service';
+import { classesRoutes } from './features/classes/classes.routes';
+import { createDepartmentsService } from './features/departments/departments.service';
+import { departmentsRoutes } from './features/departments/departments.routes';
+import { createPeopleService } from './features/people/people.service';
+import { peopleRoutes } from './features/people/people.routes';
+import { schoolsRoutes } from './features/schools/schools.routes';
+import { webApp } from './web-app';
+
+export interface AppDeps {
+  env: Env;
+  db: Knex;
+  pool: pg.Pool;
+  mailer: Mailer;
+  logger: Logger;
+  demoAccounts: { email: string; name: string; label: string }[];
+}
+
+function trustProxy(value: string): boolean | number | string {
+  if (value === 'true' || value === 'false') return value === 'true';
+  return /^\d+$/.test(value) ? Number(value) : value;
+}
+
+/** The one composition root: builds services from their dependencies and mounts every route. */
+export function createApp({ env, db, pool, mailer, logger, demoAccounts }: AppDeps): express.Express {
+  const app = express();
+  app.disable('x-powered-by');
+  app.set('trust proxy', trustProxy(env.TRUST_PROXY));
+
+  const csrf = csrfSync({ getTokenFromRequest: (req) => req.get('x-csrf-token') });
+  const passport = createPassport(env);
+  const limits = createSignInLimits(db, env.SIGNIN_LIMIT_PER_EMAIL, env.SIGNIN_LIMIT_PER_ADDRESS);
+  const auth = createAuthService({ db, mailer, limits, publicUrl: env.PUBLIC_URL, logger });
+  const people = createPeopleService({ db, mailer, publicUrl: env.PUBLIC_URL, logger });
+  const classes = createClassesService(db);
+  const departments = createDepartmentsService(db);
+  const authConfig = { demoMode: env.DEMO_MODE, demoAccounts: env.DEMO_MODE ? demoAccounts : [] };
+
+  app.use(helmet({ contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'media-src': ["'self'", 'blob:', new URL(env.S3_ENDPOINT).origin] } } }));
+  if (env.LOG_LEVEL !== 'silent') app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+
+  const api = express.Router();
+  api.get('/health', publicAccess(), async (_req, res) => {
+    await db.raw('SELECT 1');
+    res.json({ ok: true });
+  });
+  api.use(express.json({ limit: env.BODY_LIMIT }));
+  api.use(createSessionMiddleware({ pool, secret: env.SESSION_SECRET, secure: env.PUBLIC_URL.startsWith('https://') }));
+  api.use(passport.initialize());
+  api.use(csrf.csrfSynchronisedProtection);
+  api.use(loadActor(db));
+
+  api.use('/auth', authRoutes({ db, auth, passport, csrf, config: authConfig }));
+  api.use('/me', meRoutes({ csrf }));
+  api.use('/admin', peopleRoutes(people));
+  api.use(classesRoutes(classes));
+  api.use(departmentsRoutes(departments));
+  api.use(schoolsRoutes(db));
+  api.use(apiNotFound);
+
+  app.use('/api', api);
+  app.use(webApp(env.WEB_DIST));
+  app.use(errorHandler(logger));
+  return app;
+}

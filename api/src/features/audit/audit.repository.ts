@@ -1,0 +1,31 @@
+import type { Db } from '../../db/knex';
+
+export type AuditAction =
+  | 'sign_in'
+  | 'sign_in_refused'
+  | 'sign_out'
+  | 'invitation_sent'
+  | 'roles_changed'
+  | 'department_changed'
+  | 'joined_class';
+
+export interface AuditEvent {
+  schoolId: string | null;
+  actorId: string | null;
+  subjectId: string | null;
+  action: AuditAction;
+  data?: Record<string, unknown>;
+  ip?: string;
+}
+
+/** Appends to the audit log; rows are never updated. */
+export async function recordAudit(db: Db, event: AuditEvent): Promise<void> {
+  await db('audit_events').insert({
+    school_id: event.schoolId,
+    actor_id: event.actorId,
+    subject_id: event.subjectId,
+    action: event.action,
+    data: JSON.stringify(event.data ?? {}),
+    ip: event.ip ?? null,
+  });
+}

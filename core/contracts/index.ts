@@ -1,0 +1,6 @@
+export * from './common';
+export * from './auth';
+export * from './classes';
+export * from './departments';
+export * from './people';
+export * from './school';

@@ -1,0 +1,9 @@
+import { QueryClientProvider, type QueryClient } from '@tanstack/react-query';
+import { useState, type ReactNode } from 'react';
+import { createQueryClient } from '@/lib/query-client';
+
+/** App-wide providers. Tests pass their own QueryClient (retry off). */
+export function AppProvider({ children, queryClient }: { children: ReactNode; queryClient?: QueryClient }) {
+  const [client] = useState(() => queryClient ?? createQueryClient());
+  return <QueryClientProvider client={client}>{children}</QueryClientProvider>;
+}

@@ -1,0 +1,57 @@
+import type { ComponentType } from 'react';
+import type { RouteObject } from 'react-router-dom';
+import type { Role } from '@core/roles';
+import { Loading } from '@/components/ui/spinner';
+import { AppLayout } from './routes/app/app-layout';
+import { RoleLayout } from './routes/app/role-layout';
+import { RootLayout, RouteError } from './routes/root';
+
+// Every page is its own chunk: the signed-out landing page carries no admin or home code.
+const page = (load: () => Promise<{ default: ComponentType }>) => async () => ({ Component: (await load()).default });
+
+const roleSection = (role: Role, path: string, children: RouteObject[]): RouteObject => ({
+  path,
+  element: <RoleLayout role={role} />,
+  children,
+});
+
+export const routes: RouteObject[] = [
+  {
+    element: <RootLayout />,
+    errorElement: <RouteError />,
+    hydrateFallbackElement: <Loading className="p-6" />,
+    children: [
+      { index: true, lazy: page(() => import('./routes/public/landing')) },
+      { path: 'signin', lazy: page(() => import('./routes/public/sign-in')) },
+      { path: 'signin/link', lazy: page(() => import('./routes/public/sign-in-link')) },
+      { path: 'join', lazy: page(() => import('./routes/public/join')) },
+      {
+        element: <AppLayout />,
+        children: [
+          roleSection('teacher', 'teacher', [
+            { index: true, lazy: page(() => import('./routes/homes/teacher-home')) },
+            { path: 'classes/:classId', lazy: page(() => import('./routes/homes/teacher-class')) },
+          ]),
+          roleSection('student', 'student', [{ index: true, lazy: page(() => import('./routes/homes/student-home')) }]),
+          roleSection('coordinator', 'coordinator', [{ index: true, lazy: page(() => import('./routes/homes/coordinator-home')) }]),
+          roleSection('substitute', 'substitute', [{ index: true, lazy: page(() => import('./routes/homes/substitute-home')) }]),
+          {
+            path: 'admin',
+            lazy: page(() => import('./routes/admin/admin-layout')),
+            children: [
+              { index: true, lazy: page(() => import('./routes/admin/admin-index')) },
+              { path: 'people', lazy: page(() => import('./routes/admin/people')) },
+              { path: 'people/invite', lazy: page(() => import('./routes/admin/invite')) },
+              { path: 'roster', lazy: page(() => import('./routes/admin/roster')) },
+              { path: 'classes', lazy: page(() => import('./routes/admin/classes')) },
+              { path: 'classes/:classId', lazy: page(() => import('./routes/admin/class-detail')) },
+              { path: 'departments', lazy: page(() => import('./routes/admin/departments')) },
+              { path: 'school', lazy: page(() => import('./routes/admin/school')) },
+            ],
+          },
+        ],
+      },
+      { path: '*', lazy: page(() => import('./routes/not-found')) },
+    ],
+  },
+];

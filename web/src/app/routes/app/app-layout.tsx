@@ -1,0 +1,36 @@
+import { Navigate, Outlet } from 'react-router-dom';
+import { Button } from '@/components/ui/button';
+import { ErrorBanner } from '@/components/ui/error-banner';
+import { Loading } from '@/components/ui/spinner';
+import { PublicLayout } from '@/components/layouts/public-layout';
+import { paths } from '@/config/paths';
+import { useMe } from '@/features/auth/api/get-me';
+import { MeProvider } from '@/features/auth/components/me-context';
+import { AppHeader } from './app-header';
+
+/** The signed-in shell: knows who is signed in before any page inside it renders; signed-out visitors go to sign-in. */
+export function AppLayout() {
+  const me = useMe();
+  if (me.isPending) return <Loading label="Checking who is signed in…" className="px-6" />;
+  if (me.isError) {
+    return (
+      <PublicLayout>
+        <ErrorBanner error={me.error} title="Pinfield could not check your sign-in" />
+        <Button className="mt-4" variant="secondary" onClick={() => void me.refetch()}>
+          Try again
+        </Button>
+      </PublicLayout>
+    );
+  }
+  if (!me.data) return <Navigate to={paths.signIn} replace />;
+  return (
+    <MeProvider me={me.data}>
+      <div className="flex min-h-dvh flex-col">
+        <AppHeader me={me.data} />
+        <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-4 py-8 sm:px-6">
+          <Outlet />
+        </main>
+      </div>
+    </MeProvider>
+  );
+}

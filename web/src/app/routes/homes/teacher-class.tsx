@@ -1,0 +1,38 @@
+import { Link, useParams } from 'react-router-dom';
+import { Badge } from '@/components/ui/badge';
+import { ErrorBanner } from '@/components/ui/error-banner';
+import { ArrowLeftIcon } from '@/components/ui/icons';
+import { PageHeader } from '@/components/ui/page-header';
+import { Loading } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { useClass } from '@/features/classes/api/get-class';
+import { ClassRosterTable } from '@/features/classes/components/class-roster-table';
+import { JoinCode } from '@/features/classes/components/join-code';
+import { useSchoolClock } from './use-school-clock';
+
+/** One of the teacher's classes: its join code and the students enrolled. */
+export default function TeacherClassRoute() {
+  const { classId = '' } = useParams();
+  const detail = useClass(classId);
+  const clock = useSchoolClock();
+  return (
+    <>
+      <Link to={paths.teacher.home} className="mb-4 inline-flex items-center gap-1 font-bold text-copper underline">
+        <ArrowLeftIcon className="size-4" />
+        Your classes
+      </Link>
+      {detail.isPending ? <Loading label="Loading the class…" /> : null}
+      {detail.isError ? <ErrorBanner error={detail.error} title="This class could not be loaded" /> : null}
+      {detail.data ? (
+        <>
+          <PageHeader title={detail.data.name} description={detail.data.departmentName ? <Badge>{detail.data.departmentName}</Badge> : undefined} />
+          <div className="mb-6">
+            <JoinCode code={detail.data.joinCode} className={detail.data.name} />
+          </div>
+          <h2 className="mb-3 text-2xl">Students ({detail.data.students.length})</h2>
+          <ClassRosterTable students={detail.data.students} clock={clock} caption={`Students in ${detail.data.name}`} />
+        </>
+      ) : null}
+    </>
+  );
+}

@@ -1,0 +1,38 @@
+import { EmptyState } from '@/components/ui/empty-state';
+import { ErrorBanner } from '@/components/ui/error-banner';
+import { FieldLinesIcon } from '@/components/ui/icons';
+import { PageHeader } from '@/components/ui/page-header';
+import { Loading } from '@/components/ui/spinner';
+import { paths } from '@/config/paths';
+import { useSignedInMe } from '@/features/auth/components/me-context';
+import { useTeacherClasses } from '@/features/classes/api/get-teacher-classes';
+import { TeacherClassList } from '@/features/classes/components/teacher-class-list';
+
+/** A teacher's home: their classes with join codes, and where their lessons will be. */
+export default function TeacherHomeRoute() {
+  const me = useSignedInMe();
+  const classes = useTeacherClasses();
+  return (
+    <>
+      <PageHeader title={`Welcome, ${me.user.name}`} description="Your classes, and the codes students use to join them." />
+      <section aria-labelledby="classes-heading" className="flex flex-col gap-4">
+        <h2 id="classes-heading" className="text-2xl">
+          Your classes
+        </h2>
+        {classes.isPending ? <Loading label="Loading your classes…" /> : null}
+        {classes.isError ? <ErrorBanner error={classes.error} title="Your classes could not be loaded" /> : null}
+        {classes.data ? <TeacherClassList classes={classes.data.classes} classHref={paths.teacher.class} /> : null}
+      </section>
+      <section aria-labelledby="lessons-heading" className="mt-10 flex flex-col gap-4">
+        <h2 id="lessons-heading" className="text-2xl">
+          Your lessons
+        </h2>
+        <EmptyState icon={<FieldLinesIcon className="size-8" />} title="No lessons yet">
+          Recordings of your demonstrations, and the lessons you build from them by pinning checkpoints on the timeline, will appear
+          here, ready to assign to the classes above. Uploading recordings and the lesson builder are not part of this version of
+          Pinfield yet.
+        </EmptyState>
+      </section>
+    </>
+  );
+}

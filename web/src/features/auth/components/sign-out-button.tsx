@@ -1,0 +1,23 @@
+import { useNavigate } from 'react-router-dom';
+import { Button } from '@/components/ui/button';
+import { SignOutIcon } from '@/components/ui/icons';
+import { paths } from '@/config/paths';
+import { useSignOut } from '../api/sign-out';
+
+export function SignOutButton() {
+  const navigate = useNavigate();
+  const mutation = useSignOut();
+  return (
+    <span className="inline-flex flex-col items-end">
+      <Button variant="ghost" size="sm" busy={mutation.isPending} onClick={() => mutation.mutate(undefined, { onSuccess: () => void navigate(paths.landing) })}>
+        <SignOutIcon className="size-4" />
+        Sign out
+      </Button>
+      {mutation.isError ? (
+        <span role="alert" className="text-sm font-bold text-danger">
+          Sign-out failed: {mutation.error.message}
+        </span>
+      ) : null}
+    </span>
+  );
+}

@@ -1,0 +1,5 @@
+export const departmentKeys = {
+  all: ['departments'] as const,
+  adminList: () => [...departmentKeys.all, 'admin'] as const,
+  overview: () => [...departmentKeys.all, 'overview'] as const,
+};
