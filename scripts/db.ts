@@ -4,13 +4,13 @@
  * `rollback` reverts the last batch; `rollback --all` reverts every migration.
  */
 import { mkdirSync } from 'node:fs';
-import { appDatabaseUrl } from './lib/postgres.ts';
-import { ensurePackages } from './lib/apt.ts';
-import { prepareCluster, targetsLocalCluster } from './lib/database.ts';
-import { errorMessage, log, paint } from './lib/output.ts';
-import { dataPaths } from './lib/paths.ts';
-import { profiles } from './lib/ports.ts';
-import { Supervisor } from './lib/processes.ts';
+import { appDatabaseUrl } from './lib/postgres';
+import { ensurePackages } from './lib/apt';
+import { prepareCluster, targetsLocalCluster } from './lib/database';
+import { errorMessage, log, paint } from './lib/output';
+import { dataPaths } from './lib/paths';
+import { profiles } from './lib/ports';
+import { Supervisor } from './lib/processes';
 
 const usage = 'Usage: tsx scripts/db.ts <migrate|rollback [--all]|seed>';
 const supervisor = new Supervisor();
@@ -35,11 +35,11 @@ async function main(): Promise<void> {
   }
 
   if (command === 'seed') {
-    const { seed } = await import('../api/src/seed/seeder.ts');
+    const { seed } = await import('../api/src/seed/seeder');
     const names = await seed(databaseUrl);
     log(names.length > 0 ? `seed steps run: ${names.join(', ')}` : 'seed steps: all already run');
   } else {
-    const { migrate } = await import('../api/src/db/migrator.ts');
+    const { migrate } = await import('../api/src/db/migrator');
     const action = command === 'migrate' ? 'latest' : rest.includes('--all') ? 'rollback-all' : 'rollback';
     const names = await migrate(databaseUrl, action);
     const verb = command === 'migrate' ? 'applied' : 'rolled back';

@@ -5,16 +5,16 @@
  */
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
-import { childEnv, profileAppEnv, withUserOverrides } from './lib/app-env.ts';
-import { ensurePackages, startPackages } from './lib/apt.ts';
-import { prepareCluster, targetsLocalCluster } from './lib/database.ts';
-import { recordChild, stopLeftoverChildren } from './lib/leftovers.ts';
-import { errorMessage, log, paint } from './lib/output.ts';
-import { dataPaths, root } from './lib/paths.ts';
-import { assertPortFree, HOST, profiles } from './lib/ports.ts';
-import { describeExit, startChild, Supervisor, waitForHttp } from './lib/processes.ts';
-import { loadDemoAccounts, migrateAndSeed, startFakes } from './lib/services.ts';
-import { validateAppEnv } from './lib/validate-env.ts';
+import { childEnv, profileAppEnv, withUserOverrides } from './lib/app-env';
+import { ensurePackages, startPackages } from './lib/apt';
+import { prepareCluster, targetsLocalCluster } from './lib/database';
+import { recordChild, stopLeftoverChildren } from './lib/leftovers';
+import { errorMessage, log, paint } from './lib/output';
+import { dataPaths, root } from './lib/paths';
+import { assertPortFree, HOST, profiles } from './lib/ports';
+import { describeExit, startChild, Supervisor, waitForHttp } from './lib/processes';
+import { loadDemoAccounts, migrateAndSeed, startFakes } from './lib/services';
+import { validateAppEnv } from './lib/validate-env';
 
 const supervisor = new Supervisor();
 supervisor.handleSignals();

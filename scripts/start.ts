@@ -4,17 +4,17 @@
  */
 import { mkdirSync } from 'node:fs';
 import path from 'node:path';
-import { profileAppEnv, withUserOverrides } from './lib/app-env.ts';
-import { ensurePackages, startPackages } from './lib/apt.ts';
-import { prepareCluster, targetsLocalCluster } from './lib/database.ts';
-import { stopLeftoverChildren } from './lib/leftovers.ts';
-import { errorMessage, formatTable, log, paint } from './lib/output.ts';
-import { dataPaths, root } from './lib/paths.ts';
-import { assertPortFree, HOST, profiles } from './lib/ports.ts';
-import { ChildExitedError, describeExit, Supervisor } from './lib/processes.ts';
-import { buildWeb, loadDemoAccounts, migrateAndSeed, startApp, startFakes, type DemoAccount } from './lib/services.ts';
-import { formatDuration, Stopwatch } from './lib/timing.ts';
-import { validateAppEnv } from './lib/validate-env.ts';
+import { profileAppEnv, withUserOverrides } from './lib/app-env';
+import { ensurePackages, startPackages } from './lib/apt';
+import { prepareCluster, targetsLocalCluster } from './lib/database';
+import { stopLeftoverChildren } from './lib/leftovers';
+import { errorMessage, formatTable, log, paint } from './lib/output';
+import { dataPaths, root } from './lib/paths';
+import { assertPortFree, HOST, profiles } from './lib/ports';
+import { ChildExitedError, describeExit, Supervisor } from './lib/processes';
+import { buildWeb, loadDemoAccounts, migrateAndSeed, startApp, startFakes, type DemoAccount } from './lib/services';
+import { formatDuration, Stopwatch } from './lib/timing';
+import { validateAppEnv } from './lib/validate-env';
 
 const supervisor = new Supervisor();
 supervisor.handleSignals();

@@ -5,17 +5,17 @@
  */
 import { mkdirSync, rmSync } from 'node:fs';
 import path from 'node:path';
-import { profileAppEnv, type Env } from './lib/app-env.ts';
-import { ensurePackages, testPackages } from './lib/apt.ts';
-import { prepareCluster } from './lib/database.ts';
-import { stopLeftoverChildren } from './lib/leftovers.ts';
-import { errorMessage, log, paint } from './lib/output.ts';
-import { dataPaths, root } from './lib/paths.ts';
-import { appDatabaseUrl, recreateDatabase, stopLeftover, type Cluster } from './lib/postgres.ts';
-import { assertPortFree, HOST, portsOf, profiles } from './lib/ports.ts';
-import { startChild, Supervisor } from './lib/processes.ts';
-import { buildWeb, loadDemoAccounts, migrateAndSeed, startApp, startFakes } from './lib/services.ts';
-import { countVitestRun, formatSummary, type PhaseResult } from './lib/summary.ts';
+import { profileAppEnv, type Env } from './lib/app-env';
+import { ensurePackages, testPackages } from './lib/apt';
+import { prepareCluster } from './lib/database';
+import { stopLeftoverChildren } from './lib/leftovers';
+import { errorMessage, log, paint } from './lib/output';
+import { dataPaths, root } from './lib/paths';
+import { appDatabaseUrl, recreateDatabase, stopLeftover, type Cluster } from './lib/postgres';
+import { assertPortFree, HOST, portsOf, profiles } from './lib/ports';
+import { startChild, Supervisor } from './lib/processes';
+import { buildWeb, loadDemoAccounts, migrateAndSeed, startApp, startFakes } from './lib/services';
+import { countVitestRun, formatSummary, type PhaseResult } from './lib/summary';
 
 const ports = profiles.test;
 const { dataDir, pgDir, runDir } = dataPaths('test');

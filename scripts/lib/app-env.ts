@@ -1,6 +1,6 @@
 import path from 'node:path';
-import { appDatabaseUrl } from './postgres.ts';
-import { HOST, type PortProfile } from './ports.ts';
+import { appDatabaseUrl } from './postgres';
+import { HOST, type PortProfile } from './ports';
 
 export type Env = Record<string, string>;
 

@@ -1,6 +1,6 @@
 import { spawnSync } from 'node:child_process';
 import { existsSync } from 'node:fs';
-import { log } from './output.ts';
+import { log } from './output';
 
 /** Debian packages `npm start` needs; `npm test` adds chromium. */
 export const startPackages = ['postgresql', 'ffmpeg'] as const;

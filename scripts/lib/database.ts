@@ -1,11 +1,11 @@
 import { existsSync, mkdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
-import { isOurProcess } from './leftovers.ts';
-import { ensureCluster, ensureRoleAndDatabases, startCluster, stopCluster, type Cluster } from './postgres.ts';
-import { log } from './output.ts';
-import { HOST } from './ports.ts';
-import type { Supervisor } from './processes.ts';
-import { root } from './paths.ts';
+import { isOurProcess } from './leftovers';
+import { ensureCluster, ensureRoleAndDatabases, startCluster, stopCluster, type Cluster } from './postgres';
+import { log } from './output';
+import { HOST } from './ports';
+import type { Supervisor } from './processes';
+import { root } from './paths';
 
 /**
  * Creates (first time) and starts the project cluster, then the `pinfield` role and databases.

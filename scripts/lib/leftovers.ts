@@ -1,8 +1,8 @@
 import { existsSync, mkdirSync, readdirSync, readFileSync, readlinkSync, rmSync, writeFileSync } from 'node:fs';
 import path from 'node:path';
 import { setTimeout as sleep } from 'node:timers/promises';
-import { log } from './output.ts';
-import { groupAlive, type ManagedChild } from './processes.ts';
+import { log } from './output';
+import { groupAlive, type ManagedChild } from './processes';
 
 interface ChildRecord {
   name: string;

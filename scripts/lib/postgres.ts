@@ -4,9 +4,9 @@ import { chmodSync, chownSync, existsSync, mkdirSync, mkdtempSync, readdirSync, 
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
-import { isRoot } from './apt.ts';
-import { grantTraversal } from './traversal.ts';
-import { HOST } from './ports.ts';
+import { isRoot } from './apt';
+import { grantTraversal } from './traversal';
+import { HOST } from './ports';
 
 /** A project-local PostgreSQL cluster: never Debian's own cluster on 5432. */
 export interface Cluster {

@@ -2,7 +2,7 @@ import { spawn } from 'node:child_process';
 import { existsSync, readdirSync, readFileSync } from 'node:fs';
 import { createInterface } from 'node:readline';
 import { setTimeout as sleep } from 'node:timers/promises';
-import { log, paint } from './output.ts';
+import { log, paint } from './output';
 
 export interface ChildSpec {
   name: string;

@@ -1,11 +1,11 @@
 import path from 'node:path';
-import { childEnv, type Env } from './app-env.ts';
-import { recordChild } from './leftovers.ts';
-import { log } from './output.ts';
-import { root } from './paths.ts';
-import { HOST, type PortProfile } from './ports.ts';
-import { describeExit, startChild, waitForHttp, type ManagedChild, type Supervisor } from './processes.ts';
-import { isWebBuildFresh } from './web-build.ts';
+import { childEnv, type Env } from './app-env';
+import { recordChild } from './leftovers';
+import { log } from './output';
+import { root } from './paths';
+import { HOST, type PortProfile } from './ports';
+import { describeExit, startChild, waitForHttp, type ManagedChild, type Supervisor } from './processes';
+import { isWebBuildFresh } from './web-build';
 
 
 /** Runs a TypeScript entry through tsx in one Node process (no extra tsx CLI wrapper process). */
@@ -21,7 +21,7 @@ export interface DemoAccount {
 }
 
 export async function loadDemoAccounts(): Promise<DemoAccount[]> {
-  const module = (await import('../../api/src/seed/demo-roster.ts')) as { demoAccounts: DemoAccount[] };
+  const module = (await import('../../api/src/seed/demo-roster')) as { demoAccounts: DemoAccount[] };
   return module.demoAccounts;
 }
 
@@ -97,8 +97,8 @@ export async function runToCompletion(
 
 /** Applies the Knex migrations and the seed steps (each runs once; see api/src/seed). */
 export async function migrateAndSeed(databaseUrl: string): Promise<void> {
-  const { migrate } = await import('../../api/src/db/migrator.ts');
-  const { seed } = await import('../../api/src/seed/seeder.ts');
+  const { migrate } = await import('../../api/src/db/migrator');
+  const { seed } = await import('../../api/src/seed/seeder');
   const migrated = await migrate(databaseUrl, 'latest');
   log(migrated.length > 0 ? `migrations applied: ${migrated.join(', ')}` : 'migrations: already up to date');
   const seeded = await seed(databaseUrl);

@@ -1,5 +1,5 @@
 import { existsSync, readFileSync } from 'node:fs';
-import { formatDuration } from './timing.ts';
+import { formatDuration } from './timing';
 
 export interface PhaseResult {
   name: string;

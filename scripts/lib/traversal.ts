@@ -1,7 +1,7 @@
 import { spawnSync } from 'node:child_process';
 import path from 'node:path';
-import { ensurePackages } from './apt.ts';
-import { log } from './output.ts';
+import { ensurePackages } from './apt';
+import { log } from './output';
 
 function canTraverse(user: string, dir: string): boolean {
   return spawnSync('runuser', ['-u', user, '--', 'test', '-x', dir], { cwd: '/' }).status === 0;

@@ -1,6 +1,6 @@
 import session from 'express-session';
 import connectPgSimple from 'connect-pg-simple';
-import pg from 'pg';
+import type pg from 'pg';
 import type { RequestHandler } from 'express';
 
 export const SESSION_COOKIE = 'pinfield.sid';

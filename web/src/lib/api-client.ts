@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import type { z } from 'zod';
 import { ApiErrorBodySchema, CsrfDtoSchema } from '@core/contracts';
 
 export type ApiErrorDetail = { path: string; message: string };

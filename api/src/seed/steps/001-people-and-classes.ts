@@ -29,7 +29,7 @@ export async function seedPeopleAndClasses(trx: Knex.Transaction): Promise<void>
       await trx('memberships').insert({ user_id: userId, school_id: second.schoolId, roles: ['substitute'], department_id: second.departmentId, status: 'active' });
     }
   }
-  for (const [index, cls] of DEMO_CLASSES.entries()) {
+  for (const cls of DEMO_CLASSES) {
     const [row] = await trx('classes')
       .insert({ school_id: main.schoolId, department_id: main.departmentId, teacher_id: ids.get(cls.teacher), name: cls.name, join_code: cls.joinCode })
       .returning('id');

@@ -15,6 +15,8 @@ type DataTableProps<T> = {
 
 /** A TanStack table rendered as a real <table>; it scrolls sideways on narrow screens instead of squeezing. */
 export function DataTable<T>({ data, columns, caption, getRowId, rowClassName, empty, className }: DataTableProps<T>) {
+  // The app does not run the React Compiler, so its memoization warning about TanStack Table does not apply.
+  // eslint-disable-next-line react-hooks/incompatible-library -- see the line above
   const table = useReactTable({ data, columns, getCoreRowModel: getCoreRowModel(), getRowId });
   const rows = table.getRowModel().rows;
   return (
