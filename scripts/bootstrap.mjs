@@ -80,6 +80,13 @@ function run(command, args) {
       if (child.exitCode === null && child.signalCode === null) child.kill(signal);
     });
   }
+  // `kill <npm pid>` ends npm and its `sh -c` without passing the signal on; we would be left
+  // running with the whole stack. Noticing the new parent (pid 1) stops the script cleanly.
+  const parent = process.ppid;
+  const watchdog = setInterval(() => {
+    if (process.ppid !== parent && child.exitCode === null) child.kill('SIGTERM');
+  }, 500);
+  watchdog.unref();
   child.on('error', (error) => {
     console.error(`[pinfield] could not run scripts/${command}.ts: ${error.message}`);
     process.exit(1);

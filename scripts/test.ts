@@ -37,8 +37,8 @@ async function finish(extra?: PhaseResult): Promise<never> {
   process.exit(failed ? 1 : 0);
 }
 
-supervisor.handleSignals(async (signal) => {
-  await finish({ name: 'interrupted', ms: 0, passed: 0, failed: 1, setup: true, note: `stopped by ${signal}` });
+supervisor.handleSignals(async (reason) => {
+  await finish({ name: 'interrupted', ms: 0, passed: 0, failed: 1, setup: true, note: reason });
 });
 
 /** Runs a set-up step; a failure is recorded as one failed phase. Returns whether it worked. */

@@ -222,7 +222,6 @@ type Cleanup = () => Promise<void>;
 export class Supervisor {
   private readonly steps: { label: string; run: Cleanup }[] = [];
   private stopping: Promise<void> | null = null;
-  private signalHandler: ((signal: NodeJS.Signals) => void) | null = null;
 
   /** Registers a clean-up step; the last registered runs first. Once stopping, it runs at once. */
   defer(label: string, run: Cleanup): void {
@@ -239,17 +238,21 @@ export class Supervisor {
     return child;
   }
 
-  /** On SIGINT/SIGTERM: run `onSignal` (default: stop everything and exit 0). */
-  handleSignals(onSignal?: (signal: NodeJS.Signals) => Promise<void>): void {
-    this.signalHandler = (signal: NodeJS.Signals): void => {
+  /**
+   * On SIGINT/SIGTERM/SIGHUP, or when our parent process is gone (npm killed on its own passes
+   * nothing on): run `onStop` (default: stop everything and exit 0).
+   */
+  handleSignals(onStop?: (reason: string) => Promise<void>): void {
+    const stop = (reason: string): void => {
       if (this.stopping) return;
-      log(`${signal} received: stopping`);
-      const finish = onSignal ?? (async () => this.exit(0));
-      void finish(signal);
+      log(`${reason}: stopping`);
+      void (onStop ?? (async () => this.exit(0)))(reason);
     };
-    process.on('SIGINT', this.signalHandler);
-    process.on('SIGTERM', this.signalHandler);
-    process.on('SIGHUP', this.signalHandler);
+    for (const signal of ['SIGINT', 'SIGTERM', 'SIGHUP'] as const) process.on(signal, () => stop(`${signal} received`));
+    const parent = process.ppid;
+    setInterval(() => {
+      if (process.ppid !== parent) stop('the process that started this one is gone');
+    }, 1000).unref();
   }
 
   get isStopping(): boolean {

@@ -37,6 +37,13 @@ describe('isWebBuildFresh', () => {
     expect(isWebBuildFresh(root)).toBe(false);
   });
 
+  it('ignores test files and test helpers, which are not in the bundle', () => {
+    const root = project();
+    touch(path.join(root, 'web', 'src', 'lib', 'format.test.ts'), 10);
+    touch(path.join(root, 'web', 'src', 'testing', 'setup-tests.ts'), 10);
+    expect(isWebBuildFresh(root)).toBe(true);
+  });
+
   it('is stale when there is no build', () => {
     const root = mkdtempSync(path.join(tmpdir(), 'pinfield-web-'));
     touch(path.join(root, 'web', 'src', 'main.tsx'), 300);
