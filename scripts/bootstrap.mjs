@@ -16,9 +16,10 @@ export function lockHash(lockText) {
 }
 
 /**
- * Without our hash file (a tree installed by hand with `npm ci`), npm's own record of the
- * installed tree (node_modules/.package-lock.json) decides: every package the lock requires for
- * this platform must be there at the locked version.
+ * When our hash is missing or differs (a tree installed by hand, or `npm install x` that updated
+ * node_modules and the lock together), npm's own record of the installed tree
+ * (node_modules/.package-lock.json) decides: every package the lock requires for this platform
+ * must be there at the locked version, and nothing else.
  */
 export function installedTreeMatches(lock, installed) {
   const wanted = lock?.packages ?? {};
@@ -42,7 +43,7 @@ export function installState(dir) {
   if (!existsSync(path.join(dir, 'node_modules'))) return 'missing';
   const lockText = readFileSync(lockFile, 'utf8');
   const hashFile = path.join(dir, HASH_FILE);
-  if (existsSync(hashFile)) return readFileSync(hashFile, 'utf8').trim() === lockHash(lockText) ? 'fresh' : 'stale';
+  if (existsSync(hashFile) && readFileSync(hashFile, 'utf8').trim() === lockHash(lockText)) return 'fresh';
   const hidden = path.join(dir, 'node_modules', '.package-lock.json');
   if (!existsSync(hidden)) return 'stale';
   try {
@@ -113,7 +114,9 @@ function main() {
   try {
     const state = installState(root);
     if (state !== 'fresh') {
-      console.log(`[pinfield] dependencies ${state === 'missing' ? 'are not installed' : 'do not match package-lock.json'}: running npm ci`);
+      console.log(
+        `[pinfield] dependencies ${state === 'missing' ? 'are not installed' : 'do not match package-lock.json'}: running npm ci`,
+      );
       install();
     }
   } catch (error) {

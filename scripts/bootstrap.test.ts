@@ -32,11 +32,32 @@ describe('installState', () => {
     expect(installState(dir)).toBe('stale');
   });
 
+  it('with an outdated hash, trusts npm’s record when the installed tree matches the new lock', () => {
+    const text = JSON.stringify(lock);
+    const dir = project(text);
+    mkdirSync(path.join(dir, 'node_modules'));
+    writeFileSync(path.join(dir, HASH_FILE), 'hash-of-an-older-lock\n');
+    writeFileSync(
+      path.join(dir, 'node_modules', '.package-lock.json'),
+      JSON.stringify({ packages: { 'node_modules/zod': { version: '4.6.7' } } }),
+    );
+    expect(installState(dir)).toBe('fresh');
+    writeFileSync(
+      path.join(dir, 'node_modules', '.package-lock.json'),
+      JSON.stringify({ packages: { 'node_modules/zod': { version: '4.6.1' } } }),
+    );
+    writeFileSync(path.join(dir, HASH_FILE), 'hash-of-an-older-lock\n');
+    expect(installState(dir)).toBe('stale');
+  });
+
   it('without a hash, trusts npm’s record of a matching tree and stores the hash', () => {
     const text = JSON.stringify(lock);
     const dir = project(text);
     mkdirSync(path.join(dir, 'node_modules'));
-    writeFileSync(path.join(dir, 'node_modules', '.package-lock.json'), JSON.stringify({ packages: { 'node_modules/zod': { version: '4.6.7' } } }));
+    writeFileSync(
+      path.join(dir, 'node_modules', '.package-lock.json'),
+      JSON.stringify({ packages: { 'node_modules/zod': { version: '4.6.7' } } }),
+    );
     expect(installState(dir)).toBe('fresh');
     expect(readFileSync(path.join(dir, HASH_FILE), 'utf8').trim()).toBe(lockHash(text));
   });

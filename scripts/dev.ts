@@ -56,7 +56,16 @@ async function main(): Promise<void> {
     startChild({
       name: 'vite',
       command: process.execPath,
-      args: [path.join(root, 'node_modules', 'vite', 'bin', 'vite.js'), '--config', 'web/vite.config.ts', '--host', HOST, '--port', String(ports.viteDev), '--strictPort'],
+      args: [
+        path.join(root, 'node_modules', 'vite', 'bin', 'vite.js'),
+        '--config',
+        'web/vite.config.ts',
+        '--host',
+        HOST,
+        '--port',
+        String(ports.viteDev),
+        '--strictPort',
+      ],
       cwd: root,
       env: childEnv({}),
     }),
@@ -64,8 +73,16 @@ async function main(): Promise<void> {
   recordChild(runDir, vite);
   await waitForHttp(`${viteUrl}/`, 60_000, vite);
 
-  log(paint('bold', `dev servers ready: open ${paint('green', viteUrl)} (API on ${app.HOST}:${app.PORT}, inbox http://${HOST}:${ports.mailWeb}/). Ctrl-C stops everything.`));
-  const ended = await Promise.race([api.exited.then((info) => ({ who: 'api', info })), vite.exited.then((info) => ({ who: 'vite', info }))]);
+  log(
+    paint(
+      'bold',
+      `dev servers ready: open ${paint('green', viteUrl)} (API on ${app.HOST}:${app.PORT}, inbox http://${HOST}:${ports.mailWeb}/). Ctrl-C stops everything.`,
+    ),
+  );
+  const ended = await Promise.race([
+    api.exited.then((info) => ({ who: 'api', info })),
+    vite.exited.then((info) => ({ who: 'vite', info })),
+  ]);
   if (supervisor.isStopping) return;
   log(paint('red', `${ended.who} stopped (${describeExit(ended.info)}): stopping everything`));
   await supervisor.exit(1);

@@ -32,7 +32,12 @@ async function main(): Promise<void> {
   await stopLeftoverChildren(runDir, root);
   const hint = 'Is `npm start` or `npm run dev` already running? Stop it first, or choose another PORT.';
   await assertPortFree(Number(app.PORT), 'the app', hint);
-  for (const [port, purpose] of [[ports.s3, 'S3 fake'], [ports.oidc, 'OpenID Connect fake'], [ports.smtp, 'SMTP fake'], [ports.mailWeb, 'inbox page']] as const) {
+  for (const [port, purpose] of [
+    [ports.s3, 'S3 fake'],
+    [ports.oidc, 'OpenID Connect fake'],
+    [ports.smtp, 'SMTP fake'],
+    [ports.mailWeb, 'inbox page'],
+  ] as const) {
     await assertPortFree(port, purpose, hint);
   }
   mkdirSync(dataDir, { recursive: true });
@@ -46,18 +51,21 @@ async function main(): Promise<void> {
     log('DATABASE_URL points at another server: not starting the project cluster');
   }
   const accounts = await loadDemoAccounts();
-  const fakes = await clock.time('fakes', () =>
-    startFakes(supervisor, { ports, dataDir, app, accounts, runDir }),
-  );
+  const fakes = await clock.time('fakes', () => startFakes(supervisor, { ports, dataDir, app, accounts, runDir }));
   await clock.time('migrate + seed', () => migrateAndSeed(app.DATABASE_URL ?? ''));
   await clock.time('web build', () => buildWeb(supervisor));
   const appChild = await clock.time('app', () => startApp(supervisor, { app, runDir }));
 
   printBanner(app.PUBLIC_URL ?? '', `http://${HOST}:${ports.mailWeb}/`, accounts, dataDir);
-  log(`ready in ${formatDuration(clock.phases.reduce((sum, phase) => sum + phase.ms, 0))} (${clock.phases.map((p) => `${p.name} ${formatDuration(p.ms)}`).join(', ')})`);
+  log(
+    `ready in ${formatDuration(clock.phases.reduce((sum, phase) => sum + phase.ms, 0))} (${clock.phases.map((p) => `${p.name} ${formatDuration(p.ms)}`).join(', ')})`,
+  );
 
   // Either child ending on its own is a failure: report it and stop the rest.
-  const ended = await Promise.race([appChild.exited.then((info) => ({ who: 'app', info })), fakes.exited.then((info) => ({ who: 'fakes', info }))]);
+  const ended = await Promise.race([
+    appChild.exited.then((info) => ({ who: 'app', info })),
+    fakes.exited.then((info) => ({ who: 'fakes', info })),
+  ]);
   if (supervisor.isStopping) return;
   log(paint('red', `${ended.who} stopped unexpectedly (${describeExit(ended.info)}): stopping everything`));
   await supervisor.exit(1);

@@ -27,10 +27,12 @@ let finished = false;
 
 /** Stops everything, prints the durations and, as the very last line, the summary. */
 async function finish(extra?: PhaseResult): Promise<never> {
-  if (extra) results.push(extra);
   if (finished) return new Promise<never>(() => {});
   finished = true;
   await supervisor.stopAll();
+  // After the stopped phases have recorded themselves, so the reason reads last.
+  await new Promise((resolve) => setImmediate(resolve));
+  if (extra) results.push(extra);
   const lines = formatSummary(results, performance.now() - startedAt);
   process.stdout.write(`\n${lines.join('\n')}\n`);
   const failed = results.some((phase) => phase.failed > 0);
@@ -61,9 +63,12 @@ async function vitestPhase(name: string, projects: string[], env: NodeJS.Process
   const started = performance.now();
   const report = path.join(dataDir, `${name}.json`);
   const args = [
-    path.join(root, 'node_modules', 'vitest', 'vitest.mjs'), 'run',
+    path.join(root, 'node_modules', 'vitest', 'vitest.mjs'),
+    'run',
     ...projects.flatMap((project) => ['--project', project]),
-    '--reporter=default', '--reporter=json', `--outputFile.json=${report}`,
+    '--reporter=default',
+    '--reporter=json',
+    `--outputFile.json=${report}`,
     ...(filters.length > 0 ? ['--passWithNoTests', ...filters] : []),
   ];
   log(`phase ${name}: vitest ${projects.map((p) => `--project ${p}`).join(' ')}`);
@@ -87,21 +92,33 @@ async function e2ePhase(cluster: Cluster, app: Env): Promise<void> {
     await buildWeb(supervisor);
     const appChild = await startApp(supervisor, { app, runDir, name: 'e2e app' });
     results.push({ name: 'e2e set-up', ms: performance.now() - started, passed: 0, failed: 0, setup: true });
-    await vitestPhase('e2e', ['e2e'], testEnv({
-      E2E_BASE_URL: app.PUBLIC_URL ?? '',
-      E2E_INBOX_URL: `http://${HOST}:${ports.mailWeb}`,
-      E2E_OIDC_URL: `http://${HOST}:${ports.oidc}`,
-      E2E_CDP_PORT: String(ports.cdp),
-    }));
+    await vitestPhase(
+      'e2e',
+      ['e2e'],
+      testEnv({
+        E2E_BASE_URL: app.PUBLIC_URL ?? '',
+        E2E_INBOX_URL: `http://${HOST}:${ports.mailWeb}`,
+        E2E_OIDC_URL: `http://${HOST}:${ports.oidc}`,
+        E2E_CDP_PORT: String(ports.cdp),
+      }),
+    );
     await appChild.stop();
   } catch (error) {
     log(paint('red', `e2e set-up failed: ${errorMessage(error)}`));
-    results.push({ name: 'e2e set-up', ms: performance.now() - started, passed: 0, failed: 1, setup: true, note: errorMessage(error).split('\n')[0] });
+    results.push({
+      name: 'e2e set-up',
+      ms: performance.now() - started,
+      passed: 0,
+      failed: 1,
+      setup: true,
+      note: errorMessage(error).split('\n')[0],
+    });
   }
 }
 
 async function main(): Promise<void> {
-  const app = profileAppEnv(ports, { root, database: 'pinfield_e2e' });
+  // Request logs of the shared e2e app would bury the test output; LOG_LEVEL=info brings them back.
+  const app = { ...profileAppEnv(ports, { root, database: 'pinfield_e2e' }), LOG_LEVEL: process.env.LOG_LEVEL || 'warn' };
   const ready = await step('set-up', async () => {
     ensurePackages(testPackages);
     await stopLeftoverChildren(runDir, root);
@@ -112,7 +129,13 @@ async function main(): Promise<void> {
     for (const port of portsOf(ports)) {
       await assertPortFree(port, 'test profile', 'Is another `npm test` running? Wait for it or stop it.');
     }
-    const cluster = await prepareCluster(supervisor, { dir: pgDir, port: ports.postgres, throwaway: true, databases: ['pinfield'], runDir });
+    const cluster = await prepareCluster(supervisor, {
+      dir: pgDir,
+      port: ports.postgres,
+      throwaway: true,
+      databases: ['pinfield'],
+      runDir,
+    });
     const accounts = await loadDemoAccounts();
     await startFakes(supervisor, { ports, dataDir, app, accounts, runDir });
     return cluster;
@@ -122,12 +145,16 @@ async function main(): Promise<void> {
   await vitestPhase('unit', ['unit', 'web'], testEnv({}));
   // The api tests get the test fakes' addresses too (mail, S3); the lead's global set-up builds
   // its template database through PINFIELD_TEST_ADMIN_URL.
-  await vitestPhase('api', ['api'], testEnv({
-    ...app,
-    DATABASE_URL: appDatabaseUrl(ports.postgres, 'pinfield'),
-    PINFIELD_TEST_ADMIN_URL: appDatabaseUrl(ports.postgres, 'postgres'),
-    PINFIELD_TEST_INBOX_URL: `http://${HOST}:${ports.mailWeb}`,
-  }));
+  await vitestPhase(
+    'api',
+    ['api'],
+    testEnv({
+      ...app,
+      DATABASE_URL: appDatabaseUrl(ports.postgres, 'pinfield'),
+      PINFIELD_TEST_ADMIN_URL: appDatabaseUrl(ports.postgres, 'postgres'),
+      PINFIELD_TEST_INBOX_URL: `http://${HOST}:${ports.mailWeb}`,
+    }),
+  );
   if (!supervisor.isStopping) await e2ePhase(ready, app);
   await finish();
 }

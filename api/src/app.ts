@@ -54,8 +54,32 @@ export function createApp({ env, db, pool, mailer, logger, demoAccounts }: AppDe
   const departments = createDepartmentsService(db);
   const authConfig = { demoMode: env.DEMO_MODE, demoAccounts: env.DEMO_MODE ? demoAccounts : [] };
 
-  app.use(helmet({ contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'], 'media-src': ["'self'", 'blob:', new URL(env.S3_ENDPOINT).origin] } } }));
-  if (env.LOG_LEVEL !== 'silent') app.use(pinoHttp({ logger, autoLogging: { ignore: (req) => req.url === '/api/health' } }));
+  const https = env.PUBLIC_URL.startsWith('https://');
+  app.use(
+    helmet({
+      contentSecurityPolicy: {
+        directives: {
+          'img-src': ["'self'", 'data:', 'blob:'],
+          'font-src': ["'self'", 'data:'],
+          'style-src': ["'self'", "'unsafe-inline'"],
+          'media-src': ["'self'", 'blob:', new URL(env.S3_ENDPOINT).origin],
+          // Upgrading would break a plain-http local or classroom-network install.
+          'upgrade-insecure-requests': https ? [] : null,
+        },
+      },
+      strictTransportSecurity: https,
+    }),
+  );
+  if (env.LOG_LEVEL !== 'silent') {
+    app.use(
+      pinoHttp({
+        logger,
+        autoLogging: { ignore: (req) => req.url === '/api/health' || !req.url?.startsWith('/api/') },
+        // One short line per request: headers and cookies stay out of the log.
+        serializers: { req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }), res: (res: { statusCode: number }) => ({ status: res.statusCode }) },
+      }),
+    );
+  }
 
   const api = express.Router();
   api.get('/health', publicAccess(), async (_req, res) => {

@@ -36,6 +36,10 @@ describe('withUserOverrides', () => {
     expect(env.PUBLIC_URL).toBe('http://127.0.0.1:8080');
   });
 
+  it('leaves PUBLIC_URL alone when PORT is not a number (the app names PORT alone)', () => {
+    expect(withUserOverrides(profile, { PORT: 'abc' })).toMatchObject({ PORT: 'abc', PUBLIC_URL: 'http://127.0.0.1:4310' });
+  });
+
   it('ignores empty values', () => {
     expect(withUserOverrides(profile, { PORT: '' }).PORT).toBe('4310');
   });

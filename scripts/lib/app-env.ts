@@ -45,7 +45,9 @@ export function withUserOverrides(profile: Env, user: NodeJS.ProcessEnv): Env {
     if (value !== undefined && value !== '') merged[key] = value;
   }
   const movedAddress = ['HOST', 'PORT'].some((key) => user[key] !== undefined && user[key] !== '');
-  if (movedAddress && (user.PUBLIC_URL ?? '') === '') merged.PUBLIC_URL = `http://${merged.HOST}:${merged.PORT}`;
+  // A non-numeric PORT is left for the app's own check to name; it must not break PUBLIC_URL too.
+  const portOk = /^\d{1,5}$/.test(merged.PORT ?? '');
+  if (movedAddress && portOk && (user.PUBLIC_URL ?? '') === '') merged.PUBLIC_URL = `http://${merged.HOST}:${merged.PORT}`;
   return merged;
 }
 

@@ -28,7 +28,11 @@ export async function prepareCluster(
       rmSync(ownerFile, { force: true });
       log(`PostgreSQL on port ${cluster.port} stopped (fast shutdown)`);
     });
-    log(started ? `PostgreSQL started on ${HOST}:${cluster.port} (data ${options.dir})` : `PostgreSQL on ${HOST}:${cluster.port} was left running by an earlier run: taking it over`);
+    log(
+      started
+        ? `PostgreSQL started on ${HOST}:${cluster.port} (data ${options.dir})`
+        : `PostgreSQL on ${HOST}:${cluster.port} was left running by an earlier run: taking it over`,
+    );
   } else {
     log(`PostgreSQL already running on ${HOST}:${cluster.port} for another Pinfield command: using it and leaving it running`);
   }

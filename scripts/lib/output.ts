@@ -15,9 +15,7 @@ export function log(message: string): void {
 
 /** Lays out rows under headers with columns padded to the widest cell. */
 export function formatTable(headers: readonly string[], rows: readonly (readonly string[])[]): string {
-  const widths = headers.map((header, column) =>
-    Math.max(header.length, ...rows.map((row) => (row[column] ?? '').length)),
-  );
+  const widths = headers.map((header, column) => Math.max(header.length, ...rows.map((row) => (row[column] ?? '').length)));
   const line = (cells: readonly string[]): string =>
     cells
       .map((cell, column) => cell.padEnd(widths[column] ?? 0))

@@ -1,6 +1,6 @@
 import { spawnSync } from 'node:child_process';
 import { randomBytes } from 'node:crypto';
-import { chmodSync, chownSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, statSync, writeFileSync } from 'node:fs';
+import { chmodSync, chownSync, existsSync, mkdirSync, mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import path from 'node:path';
 import pg from 'pg';
@@ -29,9 +29,7 @@ export function appDatabaseUrl(port: number, database: string): string {
 /** Highest PostgreSQL major version installed under /usr/lib/postgresql (Debian layout). */
 export function findBinDir(version?: string): string {
   const root = '/usr/lib/postgresql';
-  const versions = existsSync(root)
-    ? readdirSync(root).filter((v) => existsSync(path.join(root, v, 'bin', 'pg_ctl')))
-    : [];
+  const versions = existsSync(root) ? readdirSync(root).filter((v) => existsSync(path.join(root, v, 'bin', 'pg_ctl'))) : [];
   if (version !== undefined) {
     if (!versions.includes(version)) {
       throw new Error(
@@ -129,8 +127,16 @@ function initCluster(cluster: Cluster, ids: { uid: number; gid: number } | null)
   }
   try {
     const result = runPg(cluster, 'initdb', [
-      '-D', cluster.dir, '-U', 'postgres', `--pwfile=${pwFile}`, '--auth-local=peer',
-      '--auth-host=scram-sha-256', '--encoding=UTF8', '--locale=C.UTF-8', '--no-instructions',
+      '-D',
+      cluster.dir,
+      '-U',
+      'postgres',
+      `--pwfile=${pwFile}`,
+      '--auth-local=peer',
+      '--auth-host=scram-sha-256',
+      '--encoding=UTF8',
+      '--locale=C.UTF-8',
+      '--no-instructions',
     ]);
     if (result.status !== 0) throw new Error(`initdb failed for ${cluster.dir}:\n${result.output}`);
   } finally {
@@ -211,10 +217,4 @@ export async function recreateDatabase(cluster: Cluster, name: string): Promise<
     await client.query(`DROP DATABASE IF EXISTS ${quoteIdent(name)} WITH (FORCE)`);
     await client.query(`CREATE DATABASE ${quoteIdent(name)} OWNER ${quoteIdent(APP_ROLE)}`);
   });
-}
-
-/** One line for the start-up log: version, address and data folder. */
-export function describeCluster(cluster: Cluster): string {
-  const created = statSync(path.join(cluster.dir, 'PG_VERSION')).mtime.toISOString().slice(0, 10);
-  return `PostgreSQL ${path.basename(path.dirname(cluster.binDir))} on ${HOST}:${cluster.port} (data ${cluster.dir}, created ${created})`;
 }

@@ -15,7 +15,14 @@ function isLive(pid: number): boolean {
     return false;
   }
 }
-const spec = (name: string, code: string) => ({ name, command: node, args: ['-e', code], cwd: process.cwd(), env: process.env, echo: false });
+const spec = (name: string, code: string) => ({
+  name,
+  command: node,
+  args: ['-e', code],
+  cwd: process.cwd(),
+  env: process.env,
+  echo: false,
+});
 
 // A child that starts a grandchild in its group, says so, and ignores SIGTERM only if asked.
 const parentWithGrandchild = `

@@ -7,7 +7,6 @@ import { HOST, type PortProfile } from './ports';
 import { describeExit, startChild, waitForHttp, type ManagedChild, type Supervisor } from './processes';
 import { isWebBuildFresh } from './web-build';
 
-
 /** Runs a TypeScript entry through tsx in one Node process (no extra tsx CLI wrapper process). */
 export function tsxArgs(entry: string, ...args: string[]): string[] {
   return ['--import', 'tsx', entry, ...args];
@@ -53,10 +52,7 @@ export async function startFakes(
 }
 
 /** Starts the API (which serves the built web app) and waits for GET /api/health. */
-export async function startApp(
-  supervisor: Supervisor,
-  options: { app: Env; runDir: string; name?: string },
-): Promise<ManagedChild> {
+export async function startApp(supervisor: Supervisor, options: { app: Env; runDir: string; name?: string }): Promise<ManagedChild> {
   const app = supervisor.own(
     startChild({
       name: options.name ?? 'app',

@@ -21,7 +21,11 @@ describe('countVitestRun', () => {
   });
 
   it('counts a test file that failed to load as one failure', () => {
-    const f = report('broken.json', { numPassedTests: 3, numFailedTests: 0, testResults: [file('passed', ['passed']), file('failed', [])] });
+    const f = report('broken.json', {
+      numPassedTests: 3,
+      numFailedTests: 0,
+      testResults: [file('passed', ['passed']), file('failed', [])],
+    });
     expect(countVitestRun(f, 1)).toEqual({ passed: 3, failed: 1, note: '1 test file(s) failed to run' });
   });
 

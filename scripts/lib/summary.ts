@@ -42,7 +42,8 @@ export function countVitestRun(reportFile: string, exitCode: number | null): { p
     (file) => file.status === 'failed' && !file.assertionResults.some((test) => test.status === 'failed'),
   ).length;
   const failed = report.numFailedTests + brokenFiles;
-  if (exitCode !== 0 && failed === 0) return { passed: report.numPassedTests, failed: 1, note: `vitest exited with code ${exitCode ?? 'none'}` };
+  if (exitCode !== 0 && failed === 0)
+    return { passed: report.numPassedTests, failed: 1, note: `vitest exited with code ${exitCode ?? 'none'}` };
   return { passed: report.numPassedTests, failed, ...(brokenFiles > 0 ? { note: `${brokenFiles} test file(s) failed to run` } : {}) };
 }
 
@@ -50,9 +51,7 @@ export function countVitestRun(reportFile: string, exitCode: number | null): { p
 export function formatSummary(phases: readonly PhaseResult[], totalMs: number): string[] {
   const width = Math.max(5, ...phases.map((phase) => phase.name.length));
   const lines = phases.map((phase) => {
-    const outcome = phase.setup
-      ? phase.failed > 0 ? 'FAILED' : 'ok'
-      : `${phase.passed} passed, ${phase.failed} failed`;
+    const outcome = phase.setup ? (phase.failed > 0 ? 'FAILED' : 'ok') : `${phase.passed} passed, ${phase.failed} failed`;
     return `  ${phase.name.padEnd(width)}  ${formatDuration(phase.ms).padStart(10)}  ${outcome}${phase.note ? `  (${phase.note})` : ''}`;
   });
   const passed = phases.reduce((sum, phase) => sum + phase.passed, 0);

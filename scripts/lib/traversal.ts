@@ -18,10 +18,10 @@ export function ancestors(target: string): string[] {
  * grant that one user passage (ACL `--x`, no listing, nothing for other users) and say so.
  */
 export function grantTraversal(target: string, user: string): void {
-  const blocked = ancestors(target).filter((dir) => !canTraverse(user, dir));
-  if (blocked.length === 0) return;
-  ensurePackages(['acl']);
-  for (const dir of blocked) {
+  // Top down: a folder only counts as blocked once its parent is passable.
+  for (const dir of ancestors(target)) {
+    if (canTraverse(user, dir)) continue;
+    ensurePackages(['acl']);
     const result = spawnSync('setfacl', ['-m', `u:${user}:x`, dir], { encoding: 'utf8' });
     if (result.status !== 0 || !canTraverse(user, dir)) {
       throw new Error(

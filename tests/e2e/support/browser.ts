@@ -114,7 +114,8 @@ export async function readInbox(to: string, options: { min?: number; timeoutMs?:
     if (!response.ok) throw new Error(`The inbox answered ${response.status} for ${url}: ${await response.text()}`);
     const { messages } = (await response.json()) as { messages: StoredMessage[] };
     if (messages.length >= min) return messages;
-    if (Date.now() > deadline) throw new Error(`No ${min > 1 ? `${min} messages` : 'message'} to ${to} arrived (found ${messages.length}).`);
+    if (Date.now() > deadline)
+      throw new Error(`No ${min > 1 ? `${min} messages` : 'message'} to ${to} arrived (found ${messages.length}).`);
     await sleep(200);
   }
 }

@@ -18,8 +18,8 @@ export default function AdminLayoutRoute() {
   const me = useSignedInMe();
   return (
     <RequireRole me={me} role="admin">
-      <nav aria-label="Administration" className="-mx-4 mb-8 overflow-x-auto border-b border-line px-4 sm:mx-0 sm:px-0">
-        <ul className="flex gap-1">
+      <nav aria-label="Administration" className="mb-8 border-b border-line">
+        <ul className="flex flex-wrap gap-x-1">
           {LINKS.map((link) => (
             <li key={link.to}>
               <NavLink

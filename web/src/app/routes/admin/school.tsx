@@ -14,7 +14,7 @@ export default function SchoolRoute() {
       {school.isPending ? <Loading label="Loading the school…" /> : null}
       {school.isError ? <ErrorBanner error={school.error} title="The school could not be loaded" /> : null}
       {school.data ? (
-        <div className="grid gap-8 lg:grid-cols-2">
+        <div className="grid items-start gap-8 lg:grid-cols-2">
           <Card className="flex flex-col gap-2">
             <h2 className="text-xl">{school.data.name}</h2>
             <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1">

@@ -6,25 +6,30 @@ import { activeMembership } from '@/features/auth/api/get-me';
 import { RoleSwitcher } from '@/features/auth/components/role-switcher';
 import { SignOutButton } from '@/features/auth/components/sign-out-button';
 
-/** Product name, the school being worked in, who is signed in and as what, the role switcher and sign-out. It wraps on phones. */
+/**
+ * Product name, the school being worked in, who is signed in and as what, the role switcher and sign-out.
+ * On a phone: name and sign-out on the first line, the school, person and switcher below.
+ */
 export function AppHeader({ me }: { me: MeDto }) {
   const membership = activeMembership(me);
+  const school = membership ? <span className="font-bold text-ink-muted">{membership.schoolName}</span> : null;
   return (
     <header className="border-b border-line bg-surface">
-      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-3 px-4 py-3 sm:px-6">
-        <div className="flex min-w-0 flex-wrap items-center gap-x-4 gap-y-1">
+      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
+        <div className="order-1 flex min-w-0 items-center gap-4">
           <Brand to={roleHome(me.active.role)} />
-          {membership ? (
-            <span className="min-w-0 border-l-2 border-copper pl-3 font-bold text-ink-muted">{membership.schoolName}</span>
-          ) : null}
+          {school ? <span className="hidden border-l-2 border-copper pl-3 md:inline">{school}</span> : null}
         </div>
-        <div className="ml-auto flex flex-wrap items-center justify-end gap-x-4 gap-y-2">
-          <RoleSwitcher me={me} />
+        <div className="order-2 ml-auto md:order-4 md:ml-0">
+          <SignOutButton />
+        </div>
+        <div className="order-3 flex w-full flex-wrap items-center gap-x-4 gap-y-2 md:ml-auto md:w-auto">
+          {school ? <span className="w-full border-l-2 border-copper pl-3 md:hidden">{school}</span> : null}
           <span className="text-sm">
             <span className="font-bold">{me.user.name}</span>
             <span className="text-ink-muted"> · {ROLE_LABELS[me.active.role]}</span>
           </span>
-          <SignOutButton />
+          <RoleSwitcher me={me} />
         </div>
       </div>
     </header>

@@ -21,8 +21,9 @@ export default function LandingRoute() {
   if (me.data) return <Navigate to={roleHome(me.data.active.role)} replace />;
   return (
     <PublicLayout>
-      <div className="grid gap-10 lg:grid-cols-[1fr_26rem] lg:items-start">
-        <div className="flex flex-col gap-6">
+      {/* Phones read the pitch, then sign in, then the roles; wide screens put sign-in beside both. */}
+      <div className="grid gap-8 lg:grid-cols-[1fr_26rem] lg:grid-rows-[auto_1fr] lg:gap-x-10">
+        <div className="flex flex-col gap-6 lg:col-start-1 lg:row-start-1">
           <div>
             <p className="flex items-center gap-2 font-bold text-teal">
               <FieldLinesIcon className="size-5" />
@@ -34,22 +35,22 @@ export default function LandingRoute() {
             Pinfield turns a recorded classroom demonstration into a lesson: checkpoints pinned where students usually slip, answers
             graded with the physics they need, and a clear picture of where each class stopped understanding.
           </p>
-          <ul className="flex max-w-2xl flex-col gap-3">
-            {JOBS.map((job) => (
-              <li key={job.who} className="border-l-4 border-copper pl-4">
-                <strong>{job.who}</strong> {job.what}
-              </li>
-            ))}
-          </ul>
           {me.isError ? (
             <p role="alert" className="font-bold text-danger">
               Pinfield could not check whether you are signed in: {me.error.message}
             </p>
           ) : null}
         </div>
-        <div className="flex flex-col gap-6">
+        <div className="lg:col-start-2 lg:row-span-2 lg:row-start-1">
           <SignInOptions />
         </div>
+        <ul className="flex max-w-2xl flex-col gap-3 lg:col-start-1 lg:row-start-2">
+          {JOBS.map((job) => (
+            <li key={job.who} className="border-l-4 border-copper pl-4">
+              <strong>{job.who}</strong> {job.what}
+            </li>
+          ))}
+        </ul>
       </div>
       <div className="mt-10">
         <DemoAccounts />

@@ -29,7 +29,7 @@ export default function SignInLinkRoute() {
     <PublicLayout>
       <div className="mx-auto flex max-w-xl flex-col gap-6">
         <Card className="flex flex-col gap-4">
-          <h1 className="text-3xl">Sign in with your e-mail link</h1>
+          <h1 className="text-3xl">Finish signing in</h1>
           {parsed.success ? (
             <>
               <p>Press the button to finish signing in on this device. The link then stops working, so keep this tab until you are in.</p>

@@ -1,4 +1,5 @@
 import { useAuthConfig } from '../api/get-auth-config';
+import { EmailAddress } from '@/components/ui/email-address';
 
 /** In demo mode, the invented accounts a visitor can try, with the role each one shows. */
 export function DemoAccounts() {
@@ -16,9 +17,9 @@ export function DemoAccounts() {
       <ul className="mt-3 divide-y divide-line rounded-md border border-line bg-surface">
         {config.data.demoAccounts.map((account) => (
           <li key={account.email} className="flex flex-wrap items-baseline justify-between gap-x-4 gap-y-1 px-4 py-2.5">
-            <span>
-              <span className="font-bold">{account.name}</span>
-              <span className="ml-2 font-mono text-sm break-all text-ink-muted">{account.email}</span>
+            <span className="min-w-0">
+              <span className="block font-bold sm:inline">{account.name}</span>
+              <EmailAddress email={account.email} className="block text-ink-muted sm:ml-2 sm:inline" />
             </span>
             <span className="text-sm font-bold text-teal-strong">{account.label}</span>
           </li>

@@ -18,7 +18,7 @@ type FormOutput = z.output<typeof JoinClassRequestSchema>;
 export function JoinForm() {
   const mutation = useJoinByCode();
   const [banner, setBanner] = useState<string | null>(null);
-  const form = useForm<FormInput, unknown, FormOutput>({ resolver: zodResolver(JoinClassRequestSchema), defaultValues: { code: '', email: '' } });
+  const form = useForm<FormInput, unknown, FormOutput>({ resolver: zodResolver(JoinClassRequestSchema), defaultValues: { code: '', email: '', name: '' } });
   const { errors } = form.formState;
 
   const onSubmit = form.handleSubmit(async (values) => {
@@ -26,7 +26,7 @@ export function JoinForm() {
     try {
       await mutation.mutateAsync(values);
     } catch (error) {
-      setBanner(applyServerErrors(error, form.setError, ['code', 'email']).bannerMessage);
+      setBanner(applyServerErrors(error, form.setError, ['code', 'email', 'name']).bannerMessage);
     }
   });
 
@@ -36,6 +36,9 @@ export function JoinForm() {
         {(control) => (
           <Input {...control} {...form.register('code')} autoComplete="off" autoCapitalize="characters" spellCheck={false} mono className="uppercase tracking-widest" />
         )}
+      </Field>
+      <Field label="Your name" hint="As your teacher should see it." error={errors.name?.message}>
+        {(control) => <Input {...control} {...form.register('name')} autoComplete="name" />}
       </Field>
       <Field label="Your school e-mail address" error={errors.email?.message}>
         {(control) => <Input {...control} {...form.register('email')} type="email" autoComplete="email" inputMode="email" mono />}

@@ -40,12 +40,12 @@ export function RoleSwitcher({ me }: { me: MeDto }) {
   }
 
   return (
-    <div className="flex flex-col gap-1">
-      <div className="flex items-center gap-2">
+    <div className="flex min-w-0 max-w-full flex-col gap-1">
+      <div className="flex min-w-0 items-center gap-2">
         <label htmlFor={id} className="text-sm font-bold whitespace-nowrap">
           Acting as
         </label>
-        <Select id={id} value={current} disabled={mutation.isPending} onChange={(event) => change(event.target.value)} className="min-h-9 w-auto py-1 text-sm">
+        <Select id={id} value={current} disabled={mutation.isPending} onChange={(event) => change(event.target.value)} className="min-h-9 w-auto min-w-0 max-w-full py-1 text-sm">
           {choices.map((choice) => (
             <option key={choice.value} value={choice.value}>
               {choice.label}

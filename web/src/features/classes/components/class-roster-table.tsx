@@ -3,6 +3,7 @@ import type { ReactNode } from 'react';
 import type { ClassMemberDto } from '@core/contracts';
 import { DataTable } from '@/components/ui/data-table';
 import { formatDate, type SchoolClock } from '@/lib/format';
+import { EmailAddress } from '@/components/ui/email-address';
 
 const column = createColumnHelper<ClassMemberDto>();
 
@@ -18,7 +19,7 @@ type Props = {
 export function ClassRosterTable({ students, clock, caption, renderAction }: Props) {
   const columns: ColumnDef<ClassMemberDto, unknown>[] = [
     column.display({ id: 'name', header: 'Name', cell: ({ row }) => <span className="font-bold">{row.original.name}</span> }),
-    column.display({ id: 'email', header: 'E-mail', cell: ({ row }) => <span className="font-mono text-sm break-all">{row.original.email}</span> }),
+    column.display({ id: 'email', header: 'E-mail', cell: ({ row }) => <EmailAddress email={row.original.email} className="sm:whitespace-nowrap" /> }),
     column.display({ id: 'enrolled', header: 'Enrolled', cell: ({ row }) => <span className="whitespace-nowrap">{formatDate(row.original.enrolledAt, clock)}</span> }),
   ];
   if (renderAction) {

@@ -4,6 +4,7 @@ import { ROLE_LABELS, RoleSchema } from '@core/roles';
 import { Card } from '@/components/ui/card';
 import { DataTable } from '@/components/ui/data-table';
 import { plural } from '@/lib/format';
+import { EmailAddress } from '@/components/ui/email-address';
 
 type Staff = DepartmentOverviewDto['staff'][number];
 type DeptClass = DepartmentOverviewDto['classes'][number];
@@ -18,7 +19,7 @@ function roleLabel(role: string): string {
 
 const staffColumns: ColumnDef<Staff, unknown>[] = [
   staffColumn.display({ id: 'name', header: 'Name', cell: ({ row }) => <span className="font-bold">{row.original.name}</span> }),
-  staffColumn.display({ id: 'email', header: 'E-mail', cell: ({ row }) => <span className="font-mono text-sm break-all">{row.original.email}</span> }),
+  staffColumn.display({ id: 'email', header: 'E-mail', cell: ({ row }) => <EmailAddress email={row.original.email} className="sm:whitespace-nowrap" /> }),
   staffColumn.display({ id: 'roles', header: 'Roles', cell: ({ row }) => row.original.roles.map(roleLabel).join(', ') }),
 ];
 

@@ -4,6 +4,7 @@ import { Badge } from '@/components/ui/badge';
 import { DataTable } from '@/components/ui/data-table';
 import { formatDateTime, type SchoolClock } from '@/lib/format';
 import { RoleEditor } from './role-editor';
+import { EmailAddress } from '@/components/ui/email-address';
 
 const column = createColumnHelper<PersonDto>();
 
@@ -15,7 +16,7 @@ function columnsFor(clock: SchoolClock): ColumnDef<PersonDto, unknown>[] {
       cell: ({ row }) => (
         <div className="min-w-48">
           <div className="font-bold">{row.original.name}</div>
-          <div className="font-mono text-sm break-all text-ink-muted">{row.original.email}</div>
+          <EmailAddress email={row.original.email} className="block text-ink-muted sm:whitespace-nowrap" />
         </div>
       ),
     }),

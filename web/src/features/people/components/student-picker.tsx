@@ -6,6 +6,7 @@ import { Input } from '@/components/ui/input';
 import { Loading } from '@/components/ui/spinner';
 import { useDebouncedValue } from '@/lib/use-debounced-value';
 import { usePeople } from '../api/get-people';
+import { EmailAddress } from '@/components/ui/email-address';
 
 type Props = {
   /** Students already in the class: listed as enrolled, not selectable. */
@@ -63,7 +64,7 @@ export function StudentPicker({ excludeIds, busy, onPick }: Props) {
                   />
                   <span className="min-w-0">
                     <span className="block font-bold">{person.name}</span>
-                    <span className="block font-mono text-sm break-all text-ink-muted">{person.email}</span>
+                    <EmailAddress email={person.email} className="block text-ink-muted" />
                     {enrolled ? <span className="block text-sm text-teal-strong">Already in this class</span> : null}
                   </span>
                 </label>

@@ -3,6 +3,7 @@ import type { RosterRowDto } from '@core/contracts';
 import { Badge } from '@/components/ui/badge';
 import { DataTable } from '@/components/ui/data-table';
 import { AlertIcon, CheckIcon } from '@/components/ui/icons';
+import { EmailAddress } from '@/components/ui/email-address';
 
 const column = createColumnHelper<RosterRowDto>();
 
@@ -13,7 +14,7 @@ const columns: ColumnDef<RosterRowDto, unknown>[] = [
     header: 'Check',
     cell: ({ row }) =>
       row.original.errors.length > 0 ? (
-        <div className="flex min-w-56 items-start gap-2 font-bold text-danger">
+        <div className="flex items-start gap-2 font-bold wrap-anywhere text-danger sm:min-w-52">
           <AlertIcon className="mt-1 size-4 shrink-0" />
           <ul>
             {row.original.errors.map((message) => (
@@ -28,10 +29,18 @@ const columns: ColumnDef<RosterRowDto, unknown>[] = [
         </span>
       ),
   }),
-  column.display({ id: 'email', header: 'E-mail', cell: ({ row }) => <span className="font-mono text-sm break-all">{row.original.email || '—'}</span> }),
-  column.display({ id: 'name', header: 'Name', cell: ({ row }) => row.original.name || '—' }),
+  column.display({
+    id: 'person',
+    header: 'Name and e-mail',
+    cell: ({ row }) => (
+      <div>
+        <div className="font-bold sm:whitespace-nowrap">{row.original.name || '(no name)'}</div>
+        <div className="text-ink-muted">{row.original.email ? <EmailAddress email={row.original.email} className="sm:whitespace-nowrap" /> : '(no e-mail)'}</div>
+      </div>
+    ),
+  }),
   column.display({ id: 'roles', header: 'Roles', cell: ({ row }) => row.original.roles.join(', ') || '—' }),
-  column.display({ id: 'class', header: 'Class', cell: ({ row }) => row.original.className ?? <span className="text-ink-muted">none</span> }),
+  column.display({ id: 'class', header: 'Class', cell: ({ row }) => (row.original.className ? <span className="block sm:min-w-28">{row.original.className}</span> : <span className="text-ink-muted">none</span>) }),
   column.display({
     id: 'existing',
     header: 'In the school',
