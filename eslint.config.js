@@ -21,20 +21,32 @@ export default tseslint.config(
       globals: { ...globals.node },
     },
     plugins: { 'import-x': importX },
-    settings: { 'import-x/resolver-next': [createTypeScriptImportResolver({ project: ['tsconfig.json', 'web/tsconfig.json'], noWarnOnMultipleProjects: true })] },
+    settings: {
+      'import-x/resolver-next': [
+        createTypeScriptImportResolver({ project: ['tsconfig.json', 'web/tsconfig.json'], noWarnOnMultipleProjects: true }),
+      ],
+    },
     rules: {
       '@typescript-eslint/no-explicit-any': 'error',
       '@typescript-eslint/consistent-type-imports': ['error', { fixStyle: 'inline-type-imports' }],
       '@typescript-eslint/no-floating-promises': 'error',
       '@typescript-eslint/no-misused-promises': ['error', { checksVoidReturn: { arguments: false } }],
       '@typescript-eslint/await-thenable': 'error',
-      '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' }],
+      '@typescript-eslint/no-unused-vars': [
+        'error',
+        { argsIgnorePattern: '^_', varsIgnorePattern: '^_', destructuredArrayIgnorePattern: '^_' },
+      ],
       'import-x/no-cycle': 'error',
     },
   },
   {
     files: ['core/**/*.ts'],
-    rules: { 'no-restricted-imports': zone([...NODE_AND_FRAMEWORKS, '@/*', '@api/*', '../api/*', '../web/*'], 'core/ is isomorphic: it imports nothing from Node, React, Express, Knex, web/ or api/.') },
+    rules: {
+      'no-restricted-imports': zone(
+        [...NODE_AND_FRAMEWORKS, '@/*', '@api/*', '../api/*', '../web/*'],
+        'core/ is isomorphic: it imports nothing from Node, React, Express, Knex, web/ or api/.',
+      ),
+    },
   },
   {
     files: ['api/**/*.ts'],
@@ -47,7 +59,15 @@ export default tseslint.config(
     rules: {
       ...reactHooks.configs.recommended.rules,
       ...pluginQuery.configs.recommended.rules,
-      'no-restricted-imports': zone(['@api/*', '**/api/src/*', 'node:*', 'express', 'knex', 'pg'], 'web/ never imports from api/ or Node-only packages.'),
+      'no-restricted-imports': zone(
+        ['@api/*', '**/api/src/*', 'node:*', 'express', 'knex', 'pg'],
+        'web/ never imports from api/ or Node-only packages.',
+      ),
     },
+  },
+  {
+    // Tests run in Node under vitest and may read files; they are never bundled.
+    files: ['web/**/*.test.{ts,tsx}', 'web/src/testing/**'],
+    rules: { 'no-restricted-imports': zone(['@api/*', '**/api/src/*', 'express', 'knex', 'pg'], 'web/ never imports from api/.') },
   },
 );

@@ -41,7 +41,12 @@ const accountsSchema = z
 const originsSchema = z
   .string()
   .default('http://127.0.0.1:4310')
-  .transform((text) => text.split(',').map((origin) => origin.trim()).filter((origin) => origin.length > 0))
+  .transform((text) =>
+    text
+      .split(',')
+      .map((origin) => origin.trim())
+      .filter((origin) => origin.length > 0),
+  )
   .pipe(
     z
       .array(

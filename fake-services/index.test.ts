@@ -58,7 +58,9 @@ describe('startFakeServices', () => {
     const takenPort = (taken.address() as { port: number }).port;
     const ports = { s3: await freePort(), oidc: takenPort, smtp: await freePort(), mailWeb: await freePort() };
     try {
-      await expect(startFakeServices(options(ports))).rejects.toThrow(`OIDC fake could not listen on 127.0.0.1:${takenPort}: the address is already in use`);
+      await expect(startFakeServices(options(ports))).rejects.toThrow(
+        `OIDC fake could not listen on 127.0.0.1:${takenPort}: the address is already in use`,
+      );
     } finally {
       await close(taken);
     }

@@ -89,6 +89,8 @@ describe('readFakeEnv', () => {
       'FAKE_S3_CORS_ORIGINS[0] each entry must be an origin such as http://127.0.0.1:4310 (scheme, host, optional port; no path)',
     ]);
     const notJson = readFakeEnv({ FAKE_OIDC_ACCOUNTS: '{oops' });
-    expect(notJson.ok ? [] : notJson.problems).toEqual(['FAKE_OIDC_ACCOUNTS must be JSON: an array of { "email", "name", "label" } objects']);
+    expect(notJson.ok ? [] : notJson.problems).toEqual([
+      'FAKE_OIDC_ACCOUNTS must be JSON: an array of { "email", "name", "label" } objects',
+    ]);
   });
 });

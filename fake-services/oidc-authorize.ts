@@ -18,10 +18,7 @@ export type AuthorizeParams = Partial<Record<CarriedParam, string>> & { client_i
  * Outcome of checking an authorization request: usable params, an error to show on the page
  * (client or redirect URI not trustworthy, RFC 6749 4.1.2.1), or an error to send back to the client.
  */
-export type AuthorizeCheck =
-  | { ok: true; params: AuthorizeParams }
-  | { ok: false; show: string }
-  | { ok: false; redirect: string };
+export type AuthorizeCheck = { ok: true; params: AuthorizeParams } | { ok: false; show: string } | { ok: false; redirect: string };
 
 /** Validates an authorization request read from a query string or a submitted form. */
 export function checkAuthorizeRequest(source: Record<string, unknown>, expectedClientId: string): AuthorizeCheck {

@@ -19,7 +19,10 @@ export function resolveChoice(body: Record<string, unknown>, accounts: OidcAccou
   if (picked) {
     const account = accounts.find((candidate) => candidate.email.toLowerCase() === picked.toLowerCase());
     if (!account) {
-      return { error: `"${picked}" is not one of the demo accounts here; pick one from the list or type it below.`, typed: { email: picked, name: '', unverified: false } };
+      return {
+        error: `"${picked}" is not one of the demo accounts here; pick one from the list or type it below.`,
+        typed: { email: picked, name: '', unverified: false },
+      };
     }
     return { identity: { sub: subFor(account.email), email: account.email.toLowerCase(), emailVerified: true, name: account.name } };
   }

@@ -69,9 +69,7 @@ ${view.accounts.map(accountButton).join('\n')}
 
 function typedSection(view: PickerView): string {
   const typed = view.typed ?? { email: view.params.login_hint ?? '', name: '', unverified: false };
-  const error = view.error
-    ? `<p class="alert" role="alert" id="typed-error" data-testid="oidc-error">${escapeHtml(view.error)}</p>`
-    : '';
+  const error = view.error ? `<p class="alert" role="alert" id="typed-error" data-testid="oidc-error">${escapeHtml(view.error)}</p>` : '';
   const invalid = view.error ? ' aria-invalid="true" aria-describedby="typed-error"' : '';
   return `<section class="card" aria-labelledby="typed-heading">
 <h2 id="typed-heading">Any other address</h2>

@@ -52,9 +52,15 @@ function clientCredentials(req: Request): { id?: string; secret?: string; basic:
  */
 export function guardToken(req: Request, res: Response, deps: TokenGuardDeps): OidcIdentity | undefined {
   const client = clientCredentials(req);
-  if (client.conflict) return oauthError(res, 400, 'invalid_request', 'Send the client secret once: either HTTP Basic or client_secret in the body.');
+  if (client.conflict)
+    return oauthError(res, 400, 'invalid_request', 'Send the client secret once: either HTTP Basic or client_secret in the body.');
   if (!client.id || client.secret === undefined) {
-    return oauthError(res, 401, 'invalid_client', 'Client authentication is missing: send client_id and client_secret (form body or HTTP Basic).');
+    return oauthError(
+      res,
+      401,
+      'invalid_client',
+      'Client authentication is missing: send client_id and client_secret (form body or HTTP Basic).',
+    );
   }
   if (client.id !== deps.clientId) return oauthError(res, 401, 'invalid_client', `Unknown client_id "${client.id}".`);
   if (client.secret !== deps.clientSecret) return oauthError(res, 401, 'invalid_client', 'The client secret is wrong.');
@@ -69,7 +75,8 @@ export function guardToken(req: Request, res: Response, deps: TokenGuardDeps): O
   if (!issued) return oauthError(res, 400, 'invalid_grant', 'The code is unknown, expired or already used.');
 
   const redirectUri = bodyField(req, 'redirect_uri');
-  if (!redirectUri) return oauthError(res, 400, 'invalid_request', 'The token request has no redirect_uri; send the one used at /authorize.');
+  if (!redirectUri)
+    return oauthError(res, 400, 'invalid_request', 'The token request has no redirect_uri; send the one used at /authorize.');
   if (redirectUri !== issued.redirectUri) {
     return oauthError(res, 400, 'invalid_grant', 'redirect_uri does not match the one used at /authorize.');
   }

@@ -21,7 +21,12 @@ afterAll(async () => {
 });
 
 function unescapeHtml(value: string): string {
-  return value.replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&amp;/g, '&');
+  return value
+    .replace(/&quot;/g, '"')
+    .replace(/&#39;/g, "'")
+    .replace(/&lt;/g, '<')
+    .replace(/&gt;/g, '>')
+    .replace(/&amp;/g, '&');
 }
 
 /** Hidden fields of the first form on the page (both picker forms carry the same ones). */
@@ -35,7 +40,14 @@ function hiddenFields(html: string): Record<string, string> {
 }
 
 function authorizeUrl(extra: Record<string, string> = {}): string {
-  const search = new URLSearchParams({ client_id: CLIENT_ID, redirect_uri: REDIRECT_URI, response_type: 'code', scope: 'openid email profile', state: 'st-42', ...extra });
+  const search = new URLSearchParams({
+    client_id: CLIENT_ID,
+    redirect_uri: REDIRECT_URI,
+    response_type: 'code',
+    scope: 'openid email profile',
+    state: 'st-42',
+    ...extra,
+  });
   return `${fake.url}/authorize?${search.toString()}`;
 }
 
@@ -52,7 +64,14 @@ async function choose(choice: Record<string, string>, extra: Record<string, stri
 }
 
 async function redeem(code: string, extra: Record<string, string> = {}): Promise<Response> {
-  const body = new URLSearchParams({ grant_type: 'authorization_code', code, redirect_uri: REDIRECT_URI, client_id: CLIENT_ID, client_secret: CLIENT_SECRET, ...extra });
+  const body = new URLSearchParams({
+    grant_type: 'authorization_code',
+    code,
+    redirect_uri: REDIRECT_URI,
+    client_id: CLIENT_ID,
+    client_secret: CLIENT_SECRET,
+    ...extra,
+  });
   return fetch(`${fake.url}/token`, { method: 'POST', body });
 }
 
@@ -129,7 +148,12 @@ describe('OIDC fake authorization-code flow', () => {
     expect(tokenResponse.status).toBe(200);
     const tokens = (await tokenResponse.json()) as { access_token: string; id_token: string; token_type: string };
     expect(tokens.token_type).toBe('Bearer');
-    expect(jwtPayload(tokens.id_token)).toMatchObject({ email: 'ada.quill@fernhollow.example', aud: CLIENT_ID, nonce: 'n-1', iss: fake.url });
+    expect(jwtPayload(tokens.id_token)).toMatchObject({
+      email: 'ada.quill@fernhollow.example',
+      aud: CLIENT_ID,
+      nonce: 'n-1',
+      iss: fake.url,
+    });
 
     const info = await fetch(`${fake.url}/userinfo?access_token=${encodeURIComponent(tokens.access_token)}`);
     const claims = (await info.json()) as Record<string, unknown>;
@@ -183,7 +207,11 @@ describe('OIDC fake authorization-code flow', () => {
 
   it('serves discovery and JWKS from the fake itself', async () => {
     const discovery = (await (await fetch(`${fake.url}/.well-known/openid-configuration`)).json()) as Record<string, unknown>;
-    expect(discovery).toMatchObject({ issuer: fake.url, authorization_endpoint: `${fake.url}/authorize`, userinfo_endpoint: `${fake.url}/userinfo` });
+    expect(discovery).toMatchObject({
+      issuer: fake.url,
+      authorization_endpoint: `${fake.url}/authorize`,
+      userinfo_endpoint: `${fake.url}/userinfo`,
+    });
     const jwks = (await (await fetch(String(discovery['jwks_uri']))).json()) as { keys: { kty: string; d?: string }[] };
     expect(jwks.keys[0]?.kty).toBe('RSA');
     expect(jwks.keys[0]?.d).toBeUndefined();

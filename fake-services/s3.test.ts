@@ -107,7 +107,11 @@ describe('S3 fake', () => {
   it('keeps objects on disk across a restart', async () => {
     await client.send(new PutObjectCommand({ Bucket: BUCKET, Key: 'kept.txt', Body: 'still here' }));
     await fake.close();
-    fake = await startS3Fake({ port: 0, directory: join(directory, 'nested', 's3'), buckets: [{ name: BUCKET, corsOrigins: [APP_ORIGIN] }] });
+    fake = await startS3Fake({
+      port: 0,
+      directory: join(directory, 'nested', 's3'),
+      buckets: [{ name: BUCKET, corsOrigins: [APP_ORIGIN] }],
+    });
     client.destroy();
     client = makeClient(fake.url);
     const { bytes } = await readBody('kept.txt');

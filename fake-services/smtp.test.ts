@@ -82,8 +82,12 @@ describe('SMTP fake', () => {
     const page = await fetch(`${fake.inboxUrl}/messages/${message!.id}`);
     expect(page.headers.get('content-security-policy')).toContain("default-src 'none'");
     const html = await page.text();
-    expect(html).toContain('<a href="https://127.0.0.1:4310/sign-in?t=abc&amp;x=1">https://127.0.0.1:4310/sign-in?t=abc&amp;x=1</a>. Thanks');
-    expect(html).toMatch(/<iframe title="HTML part of the message" sandbox="allow-popups allow-popups-to-escape-sandbox" srcdoc="[^"]*&lt;script&gt;/);
+    expect(html).toContain(
+      '<a href="https://127.0.0.1:4310/sign-in?t=abc&amp;x=1">https://127.0.0.1:4310/sign-in?t=abc&amp;x=1</a>. Thanks',
+    );
+    expect(html).toMatch(
+      /<iframe title="HTML part of the message" sandbox="allow-popups allow-popups-to-escape-sandbox" srcdoc="[^"]*&lt;script&gt;/,
+    );
     expect(html).not.toContain('<script>');
   });
 });

@@ -37,7 +37,7 @@ describe('the API surface', () => {
   });
 
   it('answers unknown API routes with JSON 404', async () => {
-    const res = await new Client(t).get("/api/no-such-thing");
+    const res = await new Client(t).get('/api/no-such-thing');
     expect(res.status).toBe(404);
     expect(res.body).toEqual({ error: { code: 'route_not_found', message: 'There is no API route GET /api/no-such-thing.' } });
   });
@@ -45,7 +45,11 @@ describe('the API surface', () => {
   it('answers malformed JSON with 400, never a stack trace', async () => {
     const client = new Client(t);
     const token = await client.refreshCsrf();
-    const res = await client.agent.post('/api/auth/email-link').set('X-CSRF-Token', token).set('Content-Type', 'application/json').send('{"email": ');
+    const res = await client.agent
+      .post('/api/auth/email-link')
+      .set('X-CSRF-Token', token)
+      .set('Content-Type', 'application/json')
+      .send('{"email": ');
     expect(res.status).toBe(400);
     expect(res.body).toEqual({ error: { code: 'malformed_json', message: 'The request body is not valid JSON.' } });
   });

@@ -76,7 +76,10 @@ export function createApp({ env, db, pool, mailer, logger, demoAccounts }: AppDe
         logger,
         autoLogging: { ignore: (req) => req.url === '/api/health' || !req.url?.startsWith('/api/') },
         // One short line per request: headers and cookies stay out of the log.
-        serializers: { req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }), res: (res: { statusCode: number }) => ({ status: res.statusCode }) },
+        serializers: {
+          req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+          res: (res: { statusCode: number }) => ({ status: res.statusCode }),
+        },
       }),
     );
   }

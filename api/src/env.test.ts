@@ -30,7 +30,9 @@ describe('loadEnv', () => {
   it('names a bad variable and what it expects', () => {
     expect(() => loadEnv({ PORT: 'eighty' })).toThrow(/PORT: expected a port number/);
     expect(() => loadEnv({ DATABASE_URL: 'mysql://x' })).toThrow(/DATABASE_URL: expected a postgres:\/\/ connection URL/);
-    expect(() => loadEnv({ GOOGLE_USERINFO_URL: 'http://127.0.0.1:4313/me' })).toThrow(/GOOGLE_USERINFO_URL: expected a URL ending in \/userinfo/);
+    expect(() => loadEnv({ GOOGLE_USERINFO_URL: 'http://127.0.0.1:4313/me' })).toThrow(
+      /GOOGLE_USERINFO_URL: expected a URL ending in \/userinfo/,
+    );
     expect(() => loadEnv({ DEMO_MODE: 'yes' })).toThrow(/DEMO_MODE: expected true or false/);
   });
 
@@ -45,7 +47,9 @@ describe('loadEnv', () => {
   });
 
   it('refuses the local fakes’ addresses and the demo picker in production', () => {
-    expect(() => loadEnv({ ...productionEnv, GOOGLE_TOKEN_URL: 'http://127.0.0.1:4313/token' })).toThrow(/GOOGLE_TOKEN_URL points at a loopback address/);
+    expect(() => loadEnv({ ...productionEnv, GOOGLE_TOKEN_URL: 'http://127.0.0.1:4313/token' })).toThrow(
+      /GOOGLE_TOKEN_URL points at a loopback address/,
+    );
     expect(() => loadEnv({ ...productionEnv, S3_ENDPOINT: 'http://localhost:4312' })).toThrow(/S3_ENDPOINT points at a loopback address/);
     expect(() => loadEnv({ ...productionEnv, DEMO_MODE: 'true' })).toThrow(/DEMO_MODE must be false in production/);
     expect(() => loadEnv({ ...productionEnv, SESSION_SECRET: 'short' })).toThrow(/SESSION_SECRET: expected at least 32 characters/);

@@ -8,7 +8,12 @@ const unique = () => randomBytes(4).toString('hex');
 export async function buildSchool(db: Knex, overrides: { name?: string; emailDomains?: string[] } = {}) {
   const tag = unique();
   const [row] = await db('schools')
-    .insert({ name: overrides.name ?? `Test School ${tag}`, time_zone: 'Europe/London', locale: 'en-GB', email_domains: overrides.emailDomains ?? [`school-${tag}.example`] })
+    .insert({
+      name: overrides.name ?? `Test School ${tag}`,
+      time_zone: 'Europe/London',
+      locale: 'en-GB',
+      email_domains: overrides.emailDomains ?? [`school-${tag}.example`],
+    })
     .returning(['id', 'name', 'email_domains']);
   return row as { id: string; name: string; email_domains: string[] };
 }
@@ -31,16 +36,31 @@ export async function buildMember(
     .merge({ email: options.email ?? `person-${tag}@test.example` })
     .returning(['id', 'email', 'name']);
   const { id, email, name } = user as { id: string; email: string; name: string };
-  await db('memberships').insert({ user_id: id, school_id: schoolId, roles: options.roles, department_id: options.departmentId ?? null, status: options.status ?? 'active' });
+  await db('memberships').insert({
+    user_id: id,
+    school_id: schoolId,
+    roles: options.roles,
+    department_id: options.departmentId ?? null,
+    status: options.status ?? 'active',
+  });
   return { id, email, name, schoolId };
 }
 
 /** A class with its school and teacher created when not given. */
-export async function buildClass(db: Knex, options: { schoolId?: string; teacherId?: string | null; departmentId?: string | null; name?: string } = {}) {
+export async function buildClass(
+  db: Knex,
+  options: { schoolId?: string; teacherId?: string | null; departmentId?: string | null; name?: string } = {},
+) {
   const schoolId = options.schoolId ?? (await buildSchool(db)).id;
   const teacherId = options.teacherId === undefined ? (await buildMember(db, { roles: ['teacher'], schoolId })).id : options.teacherId;
   const [row] = await db('classes')
-    .insert({ school_id: schoolId, teacher_id: teacherId, department_id: options.departmentId ?? null, name: options.name ?? `Class ${unique()}`, join_code: newJoinCode() })
+    .insert({
+      school_id: schoolId,
+      teacher_id: teacherId,
+      department_id: options.departmentId ?? null,
+      name: options.name ?? `Class ${unique()}`,
+      join_code: newJoinCode(),
+    })
     .returning(['id', 'name', 'join_code', 'school_id']);
   const cls = row as { id: string; name: string; join_code: string; school_id: string };
   return { id: cls.id, name: cls.name, joinCode: cls.join_code, schoolId: cls.school_id, teacherId };

@@ -27,7 +27,14 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
     close() {},
   };
   const pool = new pg.Pool({ connectionString: database.url, max: 3 });
-  const config = loadEnv({ NODE_ENV: 'test', DATABASE_URL: database.url, LOG_LEVEL: 'silent', SIGNIN_LIMIT_PER_EMAIL: '1000', WEB_DIST: '/nonexistent', ...env });
+  const config = loadEnv({
+    NODE_ENV: 'test',
+    DATABASE_URL: database.url,
+    LOG_LEVEL: 'silent',
+    SIGNIN_LIMIT_PER_EMAIL: '1000',
+    WEB_DIST: '/nonexistent',
+    ...env,
+  });
   const app = createApp({ env: config, db: database.knex, pool, mailer, logger: createLogger('silent'), demoAccounts: [] });
   return {
     app,

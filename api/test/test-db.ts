@@ -40,5 +40,8 @@ export async function createTestDatabase(): Promise<TestDatabase> {
 export async function createEmptyDatabase(): Promise<{ url: string; drop(): Promise<void> }> {
   const name = `pinfield_t_${randomBytes(6).toString('hex')}`;
   await admin((client) => client.query(`CREATE DATABASE ${name}`));
-  return { url: databaseUrl(name), drop: () => admin((client) => client.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`)).then(() => undefined) };
+  return {
+    url: databaseUrl(name),
+    drop: () => admin((client) => client.query(`DROP DATABASE IF EXISTS ${name} WITH (FORCE)`)).then(() => undefined),
+  };
 }

@@ -53,8 +53,10 @@ export type AuthConfigDto = z.infer<typeof AuthConfigDtoSchema>;
 
 /** Codes the sign-in callback puts in `/signin?error=` so the page can explain what happened. */
 export const SIGN_IN_ERRORS = {
-  unknown_account: 'We could not sign you in with that account. Ask your school admin for an invitation, or use the e-mail your school knows.',
-  unverified_email: 'That account’s e-mail address is not verified with the provider, so it cannot be linked. Verify it there, or sign in with an e-mail link.',
+  unknown_account:
+    'We could not sign you in with that account. Ask your school admin for an invitation, or use the e-mail your school knows.',
+  unverified_email:
+    'That account’s e-mail address is not verified with the provider, so it cannot be linked. Verify it there, or sign in with an e-mail link.',
   cancelled: 'Sign-in was cancelled.',
   provider_error: 'The sign-in provider did not answer as expected. Try again in a moment.',
   no_membership: 'Your account is not a member of any school any more. Ask your school admin.',

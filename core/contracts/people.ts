@@ -9,7 +9,11 @@ const RolesSchema = z
   .transform((roles) => [...new Set(roles)]);
 
 export const PeopleQuerySchema = z.object({
-  q: z.string().trim().max(LIMITS.searchMax, { error: `Search text has at most ${LIMITS.searchMax} characters.` }).optional(),
+  q: z
+    .string()
+    .trim()
+    .max(LIMITS.searchMax, { error: `Search text has at most ${LIMITS.searchMax} characters.` })
+    .optional(),
   role: RoleSchema.optional(),
   page: z.coerce.number({ error: 'page must be a whole number.' }).int().min(1).default(1),
   pageSize: z.coerce.number({ error: 'pageSize must be a whole number.' }).int().min(1).max(LIMITS.pageSizeMax).default(25),

@@ -30,7 +30,11 @@ describe('an admin brings people in', () => {
     await screenshot(person, 'invited-teacher-home-phone');
 
     await page.goto(`${baseUrl}/admin/people`);
-    await page.getByRole('searchbox').or(page.getByLabel(/Search/)).first().fill('nell.invited');
+    await page
+      .getByRole('searchbox')
+      .or(page.getByLabel(/Search/))
+      .first()
+      .fill('nell.invited');
     await page.getByRole('cell', { name: /nell\.invited@fernhollow\.example/ }).waitFor();
   });
 
@@ -38,7 +42,11 @@ describe('an admin brings people in', () => {
     const page = await openPage();
     await signInWithPicker(page, ADMIN);
     await page.goto(`${baseUrl}/admin/roster`);
-    const bad = ['email,name,roles,class', 'otto.roster@fernhollow.example,Otto Roster,student,10F Physics', 'not-an-address,Broken Row,student,'].join('\n');
+    const bad = [
+      'email,name,roles,class',
+      'otto.roster@fernhollow.example,Otto Roster,student,10F Physics',
+      'not-an-address,Broken Row,student,',
+    ].join('\n');
     await page.getByLabel('Or paste it here').fill(bad);
     await page.getByRole('button', { name: 'Check the roster' }).click();
     await page.getByText('Fix the roster before importing').waitFor();
@@ -47,8 +55,15 @@ describe('an admin brings people in', () => {
     await screenshot(page, 'roster-preview-with-error');
 
     await page.goto(`${baseUrl}/admin/people`);
-    await page.getByRole('searchbox').or(page.getByLabel(/Search/)).first().fill('otto.roster');
-    await page.getByText(/No one|Nobody|No people/).first().waitFor();
+    await page
+      .getByRole('searchbox')
+      .or(page.getByLabel(/Search/))
+      .first()
+      .fill('otto.roster');
+    await page
+      .getByText(/No one|Nobody|No people/)
+      .first()
+      .waitFor();
 
     await page.goto(`${baseUrl}/admin/roster`);
     await page.getByLabel('Or paste it here').fill(bad.replace('not-an-address', 'bea.roster@fernhollow.example'));
@@ -59,7 +74,11 @@ describe('an admin brings people in', () => {
     expect(await page.getByText('2 people invited, 1 enrolment made.').count()).toBe(1);
 
     await page.goto(`${baseUrl}/admin/people`);
-    await page.getByRole('searchbox').or(page.getByLabel(/Search/)).first().fill('roster@fernhollow');
+    await page
+      .getByRole('searchbox')
+      .or(page.getByLabel(/Search/))
+      .first()
+      .fill('roster@fernhollow');
     await page.getByRole('cell', { name: /otto\.roster@fernhollow\.example/ }).waitFor();
     await page.getByRole('cell', { name: /bea\.roster@fernhollow\.example/ }).waitFor();
   });

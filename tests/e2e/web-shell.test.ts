@@ -28,7 +28,10 @@ async function signIn(page: Page, email: string): Promise<void> {
 }
 
 function slug(text: string): string {
-  return text.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '');
+  return text
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, '-')
+    .replace(/^-|-$/g, '');
 }
 
 describe('signed-in shell: every demo account lands on its role’s home', () => {

@@ -16,8 +16,13 @@ export async function findActorData(db: Db, userId: string): Promise<{ user: Use
     .join('schools as s', 's.id', 'm.school_id')
     .where('m.user_id', userId)
     .orderBy('s.name')
-    .select<
-      { schoolId: string; schoolName: string; timeZone: string; locale: string; roles: Role[]; departmentId: string | null }[]
-    >('m.school_id as schoolId', 's.name as schoolName', 's.time_zone as timeZone', 's.locale', 'm.roles', 'm.department_id as departmentId');
+    .select<{ schoolId: string; schoolName: string; timeZone: string; locale: string; roles: Role[]; departmentId: string | null }[]>(
+      'm.school_id as schoolId',
+      's.name as schoolName',
+      's.time_zone as timeZone',
+      's.locale',
+      'm.roles',
+      'm.department_id as departmentId',
+    );
   return { user, memberships: rows };
 }

@@ -20,10 +20,7 @@ export interface Actor {
 }
 
 /** Picks the active membership and role from the session's choice, falling back to the first school. */
-export function chooseActive(
-  memberships: ActorMembership[],
-  wanted: { schoolId?: string; role?: string },
-): Actor['active'] | undefined {
+export function chooseActive(memberships: ActorMembership[], wanted: { schoolId?: string; role?: string }): Actor['active'] | undefined {
   const membership = memberships.find((m) => m.schoolId === wanted.schoolId) ?? memberships[0];
   if (!membership) return undefined;
   const role = membership.roles.find((r) => r === wanted.role) ?? defaultRole(membership.roles);

@@ -6,7 +6,9 @@ import { createEmptyDatabase } from '../../test/test-db';
 async function tables(url: string): Promise<string[]> {
   const client = new pg.Client({ connectionString: url });
   await client.connect();
-  const { rows } = await client.query<{ table_name: string }>("SELECT table_name FROM information_schema.tables WHERE table_schema = 'public' ORDER BY table_name");
+  const { rows } = await client.query<{ table_name: string }>(
+    "SELECT table_name FROM information_schema.tables WHERE table_schema = 'public' ORDER BY table_name",
+  );
   await client.end();
   return rows.map((row) => row.table_name);
 }
@@ -21,7 +23,19 @@ describe('migrations', () => {
   it('go up, all the way down, and up again on an empty database', async () => {
     const applied = await migrate(database.url, 'latest');
     expect(applied.length).toBeGreaterThan(0);
-    expect(await tables(database.url)).toEqual(expect.arrayContaining(['schools', 'users', 'memberships', 'classes', 'enrolments', 'sessions', 'sign_in_tokens', 'audit_events', 'seed_steps']));
+    expect(await tables(database.url)).toEqual(
+      expect.arrayContaining([
+        'schools',
+        'users',
+        'memberships',
+        'classes',
+        'enrolments',
+        'sessions',
+        'sign_in_tokens',
+        'audit_events',
+        'seed_steps',
+      ]),
+    );
 
     const reverted = await migrate(database.url, 'rollback-all');
     expect(reverted).toHaveLength(applied.length);

@@ -6,10 +6,7 @@ type Action = 'latest' | 'rollback' | 'rollback-all';
 export async function migrate(databaseUrl: string, action: Action): Promise<string[]> {
   const knex = createKnex(databaseUrl, { min: 0, max: 1 });
   try {
-    const [, names] =
-      action === 'latest'
-        ? await knex.migrate.latest()
-        : await knex.migrate.rollback(undefined, action === 'rollback-all');
+    const [, names] = action === 'latest' ? await knex.migrate.latest() : await knex.migrate.rollback(undefined, action === 'rollback-all');
     return names as string[];
   } finally {
     await knex.destroy();

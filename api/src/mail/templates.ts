@@ -36,7 +36,11 @@ export function joinLinkMail(to: string, url: string, className: string, schoolN
 
 /** The e-mail an admin's invitation sends. */
 export function invitationMail(to: string, name: string, schoolName: string, roles: string, url: string): MailMessage {
-  const lines = [`Hello ${name},`, `You have been invited to ${schoolName} on Pinfield as: ${roles}.`, 'Sign in with Google or ask for an e-mail link, using this address.'];
+  const lines = [
+    `Hello ${name},`,
+    `You have been invited to ${schoolName} on Pinfield as: ${roles}.`,
+    'Sign in with Google or ask for an e-mail link, using this address.',
+  ];
   const footer = 'If you were not expecting this, you can ignore it.';
   return {
     to,

@@ -15,8 +15,7 @@ function rule(description: string, handler: RequestHandler): AccessRule {
 export const publicAccess = (): AccessRule => rule('public', (_req, _res, next) => next());
 
 /** Any signed-in person, whatever their role. */
-export const signedIn = (): AccessRule =>
-  rule('signed-in', (req, _res, next) => next(req.actor ? undefined : new UnauthenticatedError()));
+export const signedIn = (): AccessRule => rule('signed-in', (req, _res, next) => next(req.actor ? undefined : new UnauthenticatedError()));
 
 /** Signed in, and the active school membership holds one of these roles. */
 export function requireRole(...roles: Role[]): AccessRule {

@@ -30,17 +30,23 @@ export function errorHandler(logger: Logger): ErrorRequestHandler {
     const known = error instanceof AppError ? error : fromHttpError((error ?? {}) as HttpLikeError);
     if (!known) {
       logger.error({ err: error, method: req.method, url: req.originalUrl }, 'unhandled error');
-      res.status(500).json({ error: { code: 'internal', message: 'Something went wrong on our side. Try again; if it keeps happening, tell your admin.' } });
+      res.status(500).json({
+        error: { code: 'internal', message: 'Something went wrong on our side. Try again; if it keeps happening, tell your admin.' },
+      });
       return;
     }
     if ('retryAfterSeconds' in known && typeof known.retryAfterSeconds === 'number') {
       res.setHeader('Retry-After', String(known.retryAfterSeconds));
     }
-    res.status(known.status).json({ error: { code: known.code, message: known.message, ...(known.details ? { details: known.details } : {}) } });
+    res
+      .status(known.status)
+      .json({ error: { code: known.code, message: known.message, ...(known.details ? { details: known.details } : {}) } });
   };
 }
 
 /** Unknown /api routes answer in JSON, never with the web app's HTML. */
 export const apiNotFound: RequestHandler = (req, res) => {
-  res.status(404).json({ error: { code: 'route_not_found', message: `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.` } });
+  res
+    .status(404)
+    .json({ error: { code: 'route_not_found', message: `There is no API route ${req.method} ${req.originalUrl.split('?')[0]}.` } });
 };

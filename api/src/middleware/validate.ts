@@ -10,7 +10,11 @@ export function toValidationError(error: z.ZodError, source: string): Validation
   }));
   const first = details[0];
   const summary =
-    details.length === 1 && first ? (first.path === source ? first.message : `${first.path}: ${first.message}`) : `${details.length} fields need attention: ${details.map((d) => d.path).join(', ')}.`;
+    details.length === 1 && first
+      ? first.path === source
+        ? first.message
+        : `${first.path}: ${first.message}`
+      : `${details.length} fields need attention: ${details.map((d) => d.path).join(', ')}.`;
   return new ValidationError(summary, details);
 }
 

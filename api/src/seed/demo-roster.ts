@@ -31,15 +31,38 @@ export interface DemoPerson {
 export const DEMO_STAFF: DemoPerson[] = [
   { email: 'ada.quillfeather@fernhollow.example', name: 'Ada Quillfeather', roles: ['teacher'], label: 'Teacher' },
   { email: 'bram.ostrowe@fernhollow.example', name: 'Bram Ostrowe', roles: ['teacher'], label: 'Teacher' },
-  { email: 'cora.vantwell@fernhollow.example', name: 'Cora Vantwell', roles: ['coordinator', 'teacher'], label: 'Coordinator (also teaches)' },
+  {
+    email: 'cora.vantwell@fernhollow.example',
+    name: 'Cora Vantwell',
+    roles: ['coordinator', 'teacher'],
+    label: 'Coordinator (also teaches)',
+  },
   { email: 'dov.pellring@fernhollow.example', name: 'Dov Pellring', roles: ['substitute'], label: 'Substitute teacher (two schools)' },
   { email: 'esme.hartbridge@fernhollow.example', name: 'Esme Hartbridge', roles: ['admin'], label: 'School admin' },
 ];
 
 /** Invented student names, deliberately whimsical so they read as demo data. */
 const STUDENT_NAMES: [string, ...string[]][] = [
-  ['Juno Fairweather', 'Kit Lanternby', 'Mira Coppervale', 'Olly Brackenridge', 'Pia Thistlewood', 'Rufus Emberly', 'Sable Winterbourne', 'Tomas Gallowglass'],
-  ['Uma Kettleworth', 'Vance Harrowgate', 'Wren Ashcombe', 'Xavi Dunmere', 'Yara Pebblestone', 'Zed Marchbank', 'Ivo Rookwood', 'Lotte Quarrender'],
+  [
+    'Juno Fairweather',
+    'Kit Lanternby',
+    'Mira Coppervale',
+    'Olly Brackenridge',
+    'Pia Thistlewood',
+    'Rufus Emberly',
+    'Sable Winterbourne',
+    'Tomas Gallowglass',
+  ],
+  [
+    'Uma Kettleworth',
+    'Vance Harrowgate',
+    'Wren Ashcombe',
+    'Xavi Dunmere',
+    'Yara Pebblestone',
+    'Zed Marchbank',
+    'Ivo Rookwood',
+    'Lotte Quarrender',
+  ],
 ];
 
 export const DEMO_CLASSES = [
@@ -54,5 +77,10 @@ export function studentEmail(name: string): string {
 /** The accounts the sign-in stand-in offers and `npm start` prints. */
 export const demoAccounts: DemoPerson[] = [
   ...DEMO_STAFF,
-  ...DEMO_CLASSES.map((cls): DemoPerson => ({ email: studentEmail(cls.students[0]), name: cls.students[0], roles: ['student'] as Role[], label: `Student, ${cls.name}` })),
+  ...DEMO_CLASSES.map((cls): DemoPerson => ({
+    email: studentEmail(cls.students[0]),
+    name: cls.students[0],
+    roles: ['student'] as Role[],
+    label: `Student, ${cls.name}`,
+  })),
 ];

@@ -57,7 +57,9 @@ describe('api client', () => {
   it('parses the error body into an ApiError with status, code, message and details', async () => {
     server.use(
       http.get('/api/thing', () =>
-        apiError(400, 'validation_failed', 'The e-mail address is not valid.', [{ path: 'email', message: 'Enter a valid e-mail address.' }]),
+        apiError(400, 'validation_failed', 'The e-mail address is not valid.', [
+          { path: 'email', message: 'Enter a valid e-mail address.' },
+        ]),
       ),
     );
     const error = await api.get('/api/thing', OkSchema).catch((caught: unknown) => caught);
@@ -113,17 +115,30 @@ describe('api client', () => {
 
   it('reports a network failure as status 0 with a message saying so', async () => {
     server.use(http.get('/api/thing', () => HttpResponse.error()));
-    await expect(api.get('/api/thing', OkSchema)).rejects.toMatchObject({ status: 0, code: 'network_error', message: expect.stringMatching(/could not reach its server/) });
+    await expect(api.get('/api/thing', OkSchema)).rejects.toMatchObject({
+      status: 0,
+      code: 'network_error',
+      message: expect.stringMatching(/could not reach its server/),
+    });
   });
 
   it('names the status when the error body is not the API’s JSON', async () => {
-    server.use(http.get('/api/thing', () => new HttpResponse('<html>Bad gateway</html>', { status: 502, headers: { 'Content-Type': 'text/html' } })));
-    await expect(api.get('/api/thing', OkSchema)).rejects.toMatchObject({ status: 502, code: 'unexpected_response', message: expect.stringContaining('502') });
+    server.use(
+      http.get('/api/thing', () => new HttpResponse('<html>Bad gateway</html>', { status: 502, headers: { 'Content-Type': 'text/html' } })),
+    );
+    await expect(api.get('/api/thing', OkSchema)).rejects.toMatchObject({
+      status: 502,
+      code: 'unexpected_response',
+      message: expect.stringContaining('502'),
+    });
   });
 
   it('rejects a reply that does not match the contract, naming where', async () => {
     server.use(http.get('/api/thing', () => HttpResponse.json({ ok: 'yes' })));
-    await expect(api.get('/api/thing', OkSchema)).rejects.toMatchObject({ code: 'unexpected_response', message: expect.stringContaining('at ok') });
+    await expect(api.get('/api/thing', OkSchema)).rejects.toMatchObject({
+      code: 'unexpected_response',
+      message: expect.stringContaining('at ok'),
+    });
   });
 
   it('returns nothing for 204 and drops empty query values', async () => {

@@ -1,5 +1,4 @@
 // Vitest hands CSS imports (even ?raw) to tests as empty strings, so read the stylesheet as shipped from disk.
-// eslint-disable-next-line no-restricted-imports -- test-only: runs in Node under vitest, never in the browser bundle
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { contrastRatio, relativeLuminance } from './contrast';

@@ -21,7 +21,10 @@ describe('applyServerErrors', () => {
   it('returns details it cannot place, with the summary for a banner', () => {
     const setError = vi.fn();
     const error = new ApiError(400, 'validation_failed', 'Check the form.', [{ path: 'other', message: 'Nope.' }]);
-    expect(applyServerErrors(error, setError, ['email'])).toEqual({ bannerMessage: 'Check the form.', unplaced: [{ path: 'other', message: 'Nope.' }] });
+    expect(applyServerErrors(error, setError, ['email'])).toEqual({
+      bannerMessage: 'Check the form.',
+      unplaced: [{ path: 'other', message: 'Nope.' }],
+    });
     expect(setError).not.toHaveBeenCalled();
   });
 

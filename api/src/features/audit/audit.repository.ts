@@ -1,13 +1,7 @@
 import type { Db } from '../../db/knex';
 
 export type AuditAction =
-  | 'sign_in'
-  | 'sign_in_refused'
-  | 'sign_out'
-  | 'invitation_sent'
-  | 'roles_changed'
-  | 'department_changed'
-  | 'joined_class';
+  'sign_in' | 'sign_in_refused' | 'sign_out' | 'invitation_sent' | 'roles_changed' | 'department_changed' | 'joined_class';
 
 export interface AuditEvent {
   schoolId: string | null;

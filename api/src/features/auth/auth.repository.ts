@@ -23,13 +23,29 @@ export async function findIdentityUser(db: Db, provider: string, subject: string
   return row?.user_id;
 }
 
-export async function insertIdentity(db: Db, identity: { userId: string; provider: string; subject: string; email: string }): Promise<void> {
-  await db('identities').insert({ user_id: identity.userId, provider: identity.provider, subject: identity.subject, email: identity.email });
+export async function insertIdentity(
+  db: Db,
+  identity: { userId: string; provider: string; subject: string; email: string },
+): Promise<void> {
+  await db('identities').insert({
+    user_id: identity.userId,
+    provider: identity.provider,
+    subject: identity.subject,
+    email: identity.email,
+  });
 }
 
 export async function insertToken(
   db: Db,
-  token: { tokenHash: string; purpose: TokenRow['purpose']; email: string; name?: string; userId?: string; classId?: string; expiresAt: Date },
+  token: {
+    tokenHash: string;
+    purpose: TokenRow['purpose'];
+    email: string;
+    name?: string;
+    userId?: string;
+    classId?: string;
+    expiresAt: Date;
+  },
 ): Promise<void> {
   await db('sign_in_tokens').insert({
     token_hash: token.tokenHash,

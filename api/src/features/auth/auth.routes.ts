@@ -1,7 +1,13 @@
 import { Router, type Request, type Response, type NextFunction } from 'express';
 import type { PassportInstance } from '../../auth/google';
 import type { CsrfSync } from 'csrf-sync';
-import { EmailLinkRequestSchema, EmailLinkVerifySchema, JoinClassRequestSchema, type AuthConfigDto, type SignInErrorCode } from '@core/contracts';
+import {
+  EmailLinkRequestSchema,
+  EmailLinkVerifySchema,
+  JoinClassRequestSchema,
+  type AuthConfigDto,
+  type SignInErrorCode,
+} from '@core/contracts';
 import { publicAccess, signedIn } from '../../middleware/access';
 import { bodyOf, validateBody } from '../../middleware/validate';
 import { destroySession, regenerate, saveSession, SESSION_COOKIE } from '../../auth/session';
@@ -55,7 +61,12 @@ export function authRoutes({ db, auth, passport, csrf, config }: Deps): Router {
     await startSession(req, userId, schoolId);
     const data = (await findActorData(db, userId))!;
     const active = chooseActive(data.memberships, { schoolId })!;
-    res.json(presentMe({ userId, email: data.user.email, name: data.user.name, memberships: data.memberships, active }, csrf.generateToken(req, true)));
+    res.json(
+      presentMe(
+        { userId, email: data.user.email, name: data.user.name, memberships: data.memberships, active },
+        csrf.generateToken(req, true),
+      ),
+    );
   });
 
   router.get('/google', publicAccess(), passport.authenticate('google', { session: false, prompt: 'select_account' }));
@@ -74,14 +85,27 @@ export function authRoutes({ db, auth, passport, csrf, config }: Deps): Router {
         res.redirect('/');
       } catch (caught) {
         if (!(caught instanceof SignInRefused)) return next(caught);
-        await recordAudit(db, { schoolId: null, actorId: null, subjectId: null, action: 'sign_in_refused', data: { reason: caught.reason, email: profile ? profile.email : null }, ip: req.ip });
+        await recordAudit(db, {
+          schoolId: null,
+          actorId: null,
+          subjectId: null,
+          action: 'sign_in_refused',
+          data: { reason: caught.reason, email: profile ? profile.email : null },
+          ip: req.ip,
+        });
         fail(caught.reason);
       }
     })(req, res, next);
   });
 
   router.post('/sign-out', signedIn(), async (req, res) => {
-    await recordAudit(db, { schoolId: req.actor!.active.schoolId, actorId: req.actor!.userId, subjectId: req.actor!.userId, action: 'sign_out', ip: req.ip });
+    await recordAudit(db, {
+      schoolId: req.actor!.active.schoolId,
+      actorId: req.actor!.userId,
+      subjectId: req.actor!.userId,
+      action: 'sign_out',
+      ip: req.ip,
+    });
     await destroySession(req);
     res.clearCookie(SESSION_COOKIE);
     res.status(204).end();

@@ -113,7 +113,9 @@ async function joinClass(trx: Knex.Transaction, row: repo.TokenRow): Promise<{ u
   if (!cls) throw new AppError(400, 'link_invalid', 'The class this link was for no longer exists. Ask your teacher for its new code.');
   let userId = await repo.findUserIdByEmail(trx, row.email);
   if (!userId) {
-    const [created] = await trx('users').insert({ email: row.email, name: row.name ?? row.email }).returning('id');
+    const [created] = await trx('users')
+      .insert({ email: row.email, name: row.name ?? row.email })
+      .returning('id');
     userId = (created as { id: string }).id;
   }
   const membership = await trx('memberships').where({ user_id: userId, school_id: cls.school_id }).first('id', 'roles');
@@ -123,7 +125,13 @@ async function joinClass(trx: Knex.Transaction, row: repo.TokenRow): Promise<{ u
     throw new AppError(400, 'link_invalid', 'This address is a staff account at that school, so it cannot join a class as a student.');
   }
   await insertEnrolments(trx, cls.id, [userId]);
-  await recordAudit(trx, { schoolId: cls.school_id, actorId: userId, subjectId: userId, action: 'joined_class', data: { classId: cls.id } });
+  await recordAudit(trx, {
+    schoolId: cls.school_id,
+    actorId: userId,
+    subjectId: userId,
+    action: 'joined_class',
+    data: { classId: cls.id },
+  });
   return { userId, schoolId: cls.school_id };
 }
 

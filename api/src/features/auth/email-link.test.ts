@@ -11,13 +11,19 @@ beforeAll(async () => {
 afterAll(() => t.close());
 
 const sessionId = (cookies: string[] | string | undefined) =>
-  ([] as string[]).concat(cookies ?? []).find((c) => c.startsWith(`${SESSION_COOKIE}=`))?.split(';')[0];
+  ([] as string[])
+    .concat(cookies ?? [])
+    .find((c) => c.startsWith(`${SESSION_COOKIE}=`))
+    ?.split(';')[0];
 
 describe('POST /api/auth/email-link', () => {
   it('400: names the problem with the address', async () => {
     const res = await new Client(t).send('post', '/api/auth/email-link', { email: 'not-an-address' });
     expect(res.status).toBe(400);
-    expect(res.body.error).toMatchObject({ code: 'validation_failed', message: 'email: Enter a valid e-mail address, like name@school.example.' });
+    expect(res.body.error).toMatchObject({
+      code: 'validation_failed',
+      message: 'email: Enter a valid e-mail address, like name@school.example.',
+    });
   });
 
   it('403: refuses a request without the CSRF token', async () => {
@@ -47,7 +53,8 @@ describe('POST /api/auth/email-link/verify', () => {
     const member = await buildMember(t.db, { roles: ['student'], status: 'invited' });
     const client = new Client(t);
     const csrf = await client.send('post', '/api/auth/email-link', { email: member.email });
-    const anonymousSession = sessionId(csrf.headers['set-cookie']) ?? sessionId((await client.agent.get('/api/auth/csrf')).headers['set-cookie']);
+    const anonymousSession =
+      sessionId(csrf.headers['set-cookie']) ?? sessionId((await client.agent.get('/api/auth/csrf')).headers['set-cookie']);
     const token = lastLinkToken(t.sent, member.email);
 
     const first = await client.send('post', '/api/auth/email-link/verify', { token });
@@ -65,13 +72,19 @@ describe('POST /api/auth/email-link/verify', () => {
 
     const again = await new Client(t).send('post', '/api/auth/email-link/verify', { token });
     expect(again.status).toBe(400);
-    expect(again.body.error).toEqual({ code: 'link_invalid', message: 'This sign-in link has expired or was already used. Ask for a new one below.' });
+    expect(again.body.error).toEqual({
+      code: 'link_invalid',
+      message: 'This sign-in link has expired or was already used. Ask for a new one below.',
+    });
   });
 
   it('refuses an expired link', async () => {
     const member = await buildMember(t.db, { roles: ['teacher'] });
     await new Client(t).send('post', '/api/auth/email-link', { email: member.email });
-    await t.db('sign_in_tokens').where({ email: member.email }).update({ expires_at: t.db.raw("now() - interval '1 second'") });
+    await t
+      .db('sign_in_tokens')
+      .where({ email: member.email })
+      .update({ expires_at: t.db.raw("now() - interval '1 second'") });
     const res = await new Client(t).send('post', '/api/auth/email-link/verify', { token: lastLinkToken(t.sent, member.email) });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('link_invalid');

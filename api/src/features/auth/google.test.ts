@@ -22,7 +22,13 @@ afterAll(async () => {
   await fake.close();
 });
 
-const decode = (value: string) => value.replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&lt;/g, '<').replace(/&gt;/g, '>').replace(/&amp;/g, '&');
+const decode = (value: string) =>
+  value
+    .replace(/&quot;/g, '"')
+    .replace(/&#39;/g, "'")
+    .replace(/&lt;/g, '<')
+    .replace(/&gt;/g, '>')
+    .replace(/&amp;/g, '&');
 
 /** Goes through the provider's picker typing an address, and returns where the app's callback sends the browser. */
 async function signInWithProvider(client: Client, email: string, options: { unverified?: boolean } = {}): Promise<string> {
@@ -32,7 +38,8 @@ async function signInWithProvider(client: Client, email: string, options: { unve
   const html = await picker.text();
   const form = html.slice(html.indexOf('<form'), html.indexOf('</form>'));
   const fields = new URLSearchParams();
-  for (const match of form.matchAll(/<input type="hidden" name="([^"]+)" value="([^"]*)">/g)) fields.set(decode(match[1]!), decode(match[2]!));
+  for (const match of form.matchAll(/<input type="hidden" name="([^"]+)" value="([^"]*)">/g))
+    fields.set(decode(match[1]!), decode(match[2]!));
   fields.set('email', email);
   if (options.unverified) fields.set('unverified', 'yes');
   const picked = await fetch(`${fake.url}/authorize`, { method: 'POST', body: fields, redirect: 'manual' });
@@ -54,7 +61,10 @@ describe('sign-in with the OpenID Connect provider', () => {
     expect((await t.db('memberships').where({ user_id: member.id }).first('status')).status).toBe('active');
 
     // Change the address the school knows: the provider's subject still finds the person.
-    await t.db('users').where({ id: member.id }).update({ email: `moved-${member.email}` });
+    await t
+      .db('users')
+      .where({ id: member.id })
+      .update({ email: `moved-${member.email}` });
     const again = new Client(t);
     expect(await signInWithProvider(again, member.email)).toBe('/');
     expect((await again.get('/api/me')).body.user.id).toBe(member.id);

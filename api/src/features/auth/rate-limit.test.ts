@@ -14,7 +14,11 @@ describe('sign-in rate limits', () => {
     const cls = await buildClass(t.db);
     const students = [];
     for (let i = 0; i < 40; i++) {
-      const student = await buildMember(t.db, { roles: ['student'], schoolId: cls.schoolId, email: `pupil-${i}-${cls.id.slice(0, 6)}@test.example` });
+      const student = await buildMember(t.db, {
+        roles: ['student'],
+        schoolId: cls.schoolId,
+        email: `pupil-${i}-${cls.id.slice(0, 6)}@test.example`,
+      });
       await enrol(t.db, cls.id, student.id);
       students.push(student);
     }

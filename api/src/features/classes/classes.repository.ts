@@ -10,7 +10,14 @@ export interface ClassRow {
   joinCode: string;
 }
 
-const CLASS_COLUMNS = ['id', 'school_id as schoolId', 'department_id as departmentId', 'teacher_id as teacherId', 'name', 'join_code as joinCode'];
+const CLASS_COLUMNS = [
+  'id',
+  'school_id as schoolId',
+  'department_id as departmentId',
+  'teacher_id as teacherId',
+  'name',
+  'join_code as joinCode',
+];
 
 /** A class of one school by id: never by id alone. */
 export async function findClass(db: Db, schoolId: string, classId: string): Promise<ClassRow | undefined> {
@@ -31,7 +38,13 @@ export async function findClassByJoinCode(
 
 export async function insertClass(db: Db, row: Omit<ClassRow, 'id'>): Promise<ClassRow> {
   const [created] = await db('classes')
-    .insert({ school_id: row.schoolId, department_id: row.departmentId, teacher_id: row.teacherId, name: row.name, join_code: row.joinCode })
+    .insert({
+      school_id: row.schoolId,
+      department_id: row.departmentId,
+      teacher_id: row.teacherId,
+      name: row.name,
+      join_code: row.joinCode,
+    })
     .returning(CLASS_COLUMNS);
   return created as ClassRow;
 }

@@ -40,9 +40,15 @@ export function classesRoutes(classes: ClassesService): Router {
     res.json(await classes.getDetail(req.actor!, res.locals.params.classId));
   });
 
-  router.post('/admin/classes/:classId/enrolments', requireRole('admin'), validateParams(ClassParams), validateBody(EnrolSchema), async (req, res) => {
-    res.json(await classes.enrol(req.actor!, res.locals.params.classId, bodyOf(req, EnrolSchema).userIds));
-  });
+  router.post(
+    '/admin/classes/:classId/enrolments',
+    requireRole('admin'),
+    validateParams(ClassParams),
+    validateBody(EnrolSchema),
+    async (req, res) => {
+      res.json(await classes.enrol(req.actor!, res.locals.params.classId, bodyOf(req, EnrolSchema).userIds));
+    },
+  );
 
   router.delete('/admin/classes/:classId/enrolments/:userId', requireRole('admin'), validateParams(EnrolmentParams), async (req, res) => {
     await classes.unenrol(req.actor!, res.locals.params.classId, res.locals.params.userId);

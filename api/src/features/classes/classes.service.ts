@@ -12,10 +12,15 @@ const UNIQUE_VIOLATION = '23505';
 
 /** Classes, their rosters and joining by code. */
 export function createClassesService(db: Knex) {
-  async function loadVisible(actor: Actor, classId: string, allowed: (actor: Actor, cls: repo.ClassRow) => boolean): Promise<repo.ClassRow> {
+  async function loadVisible(
+    actor: Actor,
+    classId: string,
+    allowed: (actor: Actor, cls: repo.ClassRow) => boolean,
+  ): Promise<repo.ClassRow> {
     const cls = await repo.findClass(db, actor.active.schoolId, classId);
     if (!cls) throw new NotFoundError('That class');
-    if (!allowed(actor, cls)) throw new ForbiddenError('Only the class’s teacher, its department’s coordinator or an admin can open this class.');
+    if (!allowed(actor, cls))
+      throw new ForbiddenError('Only the class’s teacher, its department’s coordinator or an admin can open this class.');
     return cls;
   }
 
@@ -25,7 +30,8 @@ export function createClassesService(db: Knex) {
   }
 
   return {
-    listForTeacher: (actor: Actor): Promise<ClassDto[]> => read.listClasses(db, { schoolId: actor.active.schoolId, teacherId: actor.userId }),
+    listForTeacher: (actor: Actor): Promise<ClassDto[]> =>
+      read.listClasses(db, { schoolId: actor.active.schoolId, teacherId: actor.userId }),
 
     listForSchool: (actor: Actor): Promise<ClassDto[]> => read.listClasses(db, { schoolId: actor.active.schoolId }),
 
@@ -38,15 +44,25 @@ export function createClassesService(db: Knex) {
     async create(actor: Actor, input: ClassCreate): Promise<ClassDto> {
       const schoolId = actor.active.schoolId;
       if (input.departmentId && !(await db('departments').where({ id: input.departmentId, school_id: schoolId }).first('id'))) {
-        throw new ValidationError('That department is not in this school.', [{ path: 'departmentId', message: 'Choose a department of this school.' }]);
+        throw new ValidationError('That department is not in this school.', [
+          { path: 'departmentId', message: 'Choose a department of this school.' },
+        ]);
       }
       if (input.teacherId && (await repo.usersWithRole(db, schoolId, [input.teacherId], 'teacher')).length === 0) {
-        throw new ValidationError('That person is not a teacher in this school.', [{ path: 'teacherId', message: 'Choose a teacher of this school.' }]);
+        throw new ValidationError('That person is not a teacher in this school.', [
+          { path: 'teacherId', message: 'Choose a teacher of this school.' },
+        ]);
       }
       // A clash of random codes is rare; try again rather than fail the teacher.
       for (let attempt = 0; ; attempt++) {
         try {
-          const created = await repo.insertClass(db, { schoolId, departmentId: input.departmentId, teacherId: input.teacherId, name: input.name, joinCode: newJoinCode() });
+          const created = await repo.insertClass(db, {
+            schoolId,
+            departmentId: input.departmentId,
+            teacherId: input.teacherId,
+            name: input.name,
+            joinCode: newJoinCode(),
+          });
           const [dto] = await read.listClasses(db, { schoolId, classId: created.id });
           return dto!;
         } catch (error) {
@@ -60,7 +76,10 @@ export function createClassesService(db: Knex) {
       const students = await repo.usersWithRole(db, actor.active.schoolId, userIds, 'student');
       const missing = userIds.filter((id) => !students.includes(id));
       if (missing.length > 0) {
-        throw new ValidationError(`${missing.length} of the people chosen are not students of this school.`, missing.map((id) => ({ path: 'userIds', message: `${id} is not a student of this school.` })));
+        throw new ValidationError(
+          `${missing.length} of the people chosen are not students of this school.`,
+          missing.map((id) => ({ path: 'userIds', message: `${id} is not a student of this school.` })),
+        );
       }
       await repo.insertEnrolments(db, cls.id, students);
       return detail(actor, cls);
@@ -78,7 +97,13 @@ export function createClassesService(db: Knex) {
         throw new NotFoundError(`A class with code ${code} in ${actor.active.schoolName}`);
       }
       await repo.insertEnrolments(db, found.id, [actor.userId]);
-      await recordAudit(db, { schoolId: found.schoolId, actorId: actor.userId, subjectId: actor.userId, action: 'joined_class', data: { classId: found.id } });
+      await recordAudit(db, {
+        schoolId: found.schoolId,
+        actorId: actor.userId,
+        subjectId: actor.userId,
+        action: 'joined_class',
+        data: { classId: found.id },
+      });
       const classes = await read.listStudentClasses(db, actor.active.schoolId, actor.userId);
       return classes.find((c) => c.id === found.id)!;
     },

@@ -79,7 +79,11 @@ describe('joining a class by code', () => {
   it('an address off the school’s domains gets the same answer and no mail', async () => {
     const cls = await buildClass(t.db);
     const before = t.sent.length;
-    const res = await new Client(t).send('post', '/api/auth/join', { code: cls.joinCode, email: 'outsider@elsewhere.example', name: 'Out Sider' });
+    const res = await new Client(t).send('post', '/api/auth/join', {
+      code: cls.joinCode,
+      email: 'outsider@elsewhere.example',
+      name: 'Out Sider',
+    });
     expect(res.status).toBe(202);
     expect(res.body.message).toBe(NEUTRAL_JOIN_NOTICE);
     expect(t.sent.length).toBe(before);
@@ -124,7 +128,9 @@ describe('admin class management', () => {
   it('refuses a teacher from another school', async () => {
     const admin = await buildMember(t.db, { roles: ['admin'] });
     const outsider = await buildMember(t.db, { roles: ['teacher'] });
-    const res = await (await signedInClient(t, admin.email)).send('post', '/api/admin/classes', { name: 'X', departmentId: null, teacherId: outsider.id });
+    const res = await (
+      await signedInClient(t, admin.email)
+    ).send('post', '/api/admin/classes', { name: 'X', departmentId: null, teacherId: outsider.id });
     expect(res.status).toBe(400);
     expect(res.body.error.details).toEqual([{ path: 'teacherId', message: 'Choose a teacher of this school.' }]);
   });

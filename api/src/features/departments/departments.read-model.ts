@@ -21,5 +21,11 @@ export async function listDepartmentStaff(db: Db, schoolId: string, departmentId
     .whereIn('m.department_id', departmentIds)
     .whereRaw("m.roles <> ARRAY['student']::text[]")
     .orderBy('u.name')
-    .select<{ id: string; name: string; email: string; roles: string[]; departmentId: string }[]>('u.id', 'u.name', 'u.email', 'm.roles', 'm.department_id as departmentId');
+    .select<{ id: string; name: string; email: string; roles: string[]; departmentId: string }[]>(
+      'u.id',
+      'u.name',
+      'u.email',
+      'm.roles',
+      'm.department_id as departmentId',
+    );
 }

@@ -24,7 +24,10 @@ export function createDepartmentsService(db: Knex) {
       const all = await listDepartments(db, schoolId);
       const mine = actor.active.departmentId ? all.filter((d) => d.id === actor.active.departmentId) : all;
       const ids = mine.map((d) => d.id);
-      const [staff, classes] = await Promise.all([listDepartmentStaff(db, schoolId, ids), listClasses(db, { schoolId, departmentIds: ids })]);
+      const [staff, classes] = await Promise.all([
+        listDepartmentStaff(db, schoolId, ids),
+        listClasses(db, { schoolId, departmentIds: ids }),
+      ]);
       return mine.map((department) => ({
         id: department.id,
         name: department.name,

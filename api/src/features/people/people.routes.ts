@@ -15,9 +15,15 @@ export function peopleRoutes(people: PeopleService): Router {
     res.json(await people.list(req.actor!, res.locals.query));
   });
 
-  router.patch('/people/:userId', requireRole('admin'), validateParams(PersonParams), validateBody(PersonUpdateSchema), async (req, res) => {
-    res.json(await people.update(req.actor!, res.locals.params.userId, bodyOf(req, PersonUpdateSchema), req.ip ?? 'unknown'));
-  });
+  router.patch(
+    '/people/:userId',
+    requireRole('admin'),
+    validateParams(PersonParams),
+    validateBody(PersonUpdateSchema),
+    async (req, res) => {
+      res.json(await people.update(req.actor!, res.locals.params.userId, bodyOf(req, PersonUpdateSchema), req.ip ?? 'unknown'));
+    },
+  );
 
   router.post('/invitations', requireRole('admin'), validateBody(InvitationCreateSchema), async (req, res) => {
     res.status(201).json(await people.invite(req.actor!, bodyOf(req, InvitationCreateSchema), req.ip ?? 'unknown'));

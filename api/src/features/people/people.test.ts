@@ -16,7 +16,9 @@ async function adminClient() {
 describe('POST /api/admin/invitations', () => {
   it('403 for a teacher', async () => {
     const teacher = await buildMember(t.db, { roles: ['teacher'] });
-    const res = await (await signedInClient(t, teacher.email)).send('post', '/api/admin/invitations', { email: 'x@test.example', name: 'X', roles: ['teacher'] });
+    const res = await (
+      await signedInClient(t, teacher.email)
+    ).send('post', '/api/admin/invitations', { email: 'x@test.example', name: 'X', roles: ['teacher'] });
     expect(res.status).toBe(403);
   });
 
@@ -33,7 +35,11 @@ describe('POST /api/admin/invitations', () => {
 
   it('invites a person who then signs in and lands in the school', async () => {
     const { admin, client } = await adminClient();
-    const res = await client.send('post', '/api/admin/invitations', { email: 'New.Teacher@Test.example', name: 'New Teacher', roles: ['teacher', 'coordinator'] });
+    const res = await client.send('post', '/api/admin/invitations', {
+      email: 'New.Teacher@Test.example',
+      name: 'New Teacher',
+      roles: ['teacher', 'coordinator'],
+    });
     expect(res.status).toBe(201);
     expect(res.body).toMatchObject({ email: 'new.teacher@test.example', status: 'invited', roles: ['teacher', 'coordinator'] });
     const mail = t.sent.at(-1)!;
@@ -61,7 +67,13 @@ describe('roster import', () => {
   it('previews per-row errors and imports nothing while any row is bad', async () => {
     const { admin, client } = await adminClient();
     const cls = await buildClass(t.db, { schoolId: admin.schoolId, name: '8B Physics' });
-    const csv = ['email,name,roles,class', 'lena.roster@test.example,Lena Roster,student,8B Physics', 'broken-address,No At,student,', 'sam.roster@test.example,Sam Roster,wizard,', 'lena.roster@test.example,Lena Twice,student,'].join('\n');
+    const csv = [
+      'email,name,roles,class',
+      'lena.roster@test.example,Lena Roster,student,8B Physics',
+      'broken-address,No At,student,',
+      'sam.roster@test.example,Sam Roster,wizard,',
+      'lena.roster@test.example,Lena Twice,student,',
+    ].join('\n');
     const preview = await client.send('post', '/api/admin/roster/preview', { csv });
     expect(preview.status).toBe(200);
     expect(preview.body.valid).toBe(false);
@@ -84,7 +96,8 @@ describe('roster import', () => {
   it('imports a clean roster: invitations sent and students enrolled', async () => {
     const { admin, client } = await adminClient();
     const cls = await buildClass(t.db, { schoolId: admin.schoolId, name: '9C Physics' });
-    const csv = 'Email,Name,Roles,Class\r\nmo.import@test.example,Mo Import,student,9c physics\r\nkai.import@test.example,Kai Import,teacher;coordinator,\r\n';
+    const csv =
+      'Email,Name,Roles,Class\r\nmo.import@test.example,Mo Import,student,9c physics\r\nkai.import@test.example,Kai Import,teacher;coordinator,\r\n';
     const res = await client.send('post', '/api/admin/roster/import', { csv });
     expect(res.status).toBe(201);
     expect(res.body).toEqual({ invited: 2, enrolled: 1 });
@@ -145,4 +158,3 @@ describe('GET /api/admin/people', () => {
     expect(bad.status).toBe(400);
   });
 });
-

@@ -17,7 +17,10 @@ export function schoolsRoutes(db: Knex): Router {
   router.patch('/admin/school', requireRole('admin'), validateBody(SchoolUpdateSchema), async (req, res) => {
     const { emailDomains } = bodyOf(req, SchoolUpdateSchema);
     const query = db('schools').where({ id: req.actor!.active.schoolId });
-    const [row] = emailDomains === undefined ? [await query.first(COLUMNS)] : await query.update({ email_domains: [...new Set(emailDomains)] }).returning(COLUMNS);
+    const [row] =
+      emailDomains === undefined
+        ? [await query.first(COLUMNS)]
+        : await query.update({ email_domains: [...new Set(emailDomains)] }).returning(COLUMNS);
     res.json(row as SchoolDto);
   });
 

@@ -24,14 +24,32 @@ export async function seedPeopleAndClasses(trx: Knex.Transaction): Promise<void>
     const userId = await insertUser(trx, person.email, person.name);
     ids.set(person.email, userId);
     const inDepartment = person.roles.some((role) => role !== 'admin');
-    await trx('memberships').insert({ user_id: userId, school_id: main.schoolId, roles: person.roles, department_id: inDepartment ? main.departmentId : null, status: 'active' });
+    await trx('memberships').insert({
+      user_id: userId,
+      school_id: main.schoolId,
+      roles: person.roles,
+      department_id: inDepartment ? main.departmentId : null,
+      status: 'active',
+    });
     if (person.roles.includes('substitute')) {
-      await trx('memberships').insert({ user_id: userId, school_id: second.schoolId, roles: ['substitute'], department_id: second.departmentId, status: 'active' });
+      await trx('memberships').insert({
+        user_id: userId,
+        school_id: second.schoolId,
+        roles: ['substitute'],
+        department_id: second.departmentId,
+        status: 'active',
+      });
     }
   }
   for (const cls of DEMO_CLASSES) {
     const [row] = await trx('classes')
-      .insert({ school_id: main.schoolId, department_id: main.departmentId, teacher_id: ids.get(cls.teacher), name: cls.name, join_code: cls.joinCode })
+      .insert({
+        school_id: main.schoolId,
+        department_id: main.departmentId,
+        teacher_id: ids.get(cls.teacher),
+        name: cls.name,
+        join_code: cls.joinCode,
+      })
       .returning('id');
     const classId = (row as { id: string }).id;
     for (const name of cls.students) {
@@ -40,5 +58,10 @@ export async function seedPeopleAndClasses(trx: Knex.Transaction): Promise<void>
       await trx('enrolments').insert({ class_id: classId, student_id: userId });
     }
   }
-  await trx('classes').insert({ school_id: second.schoolId, department_id: second.departmentId, name: '12S Physics', join_code: 'TWLVSPHY' });
+  await trx('classes').insert({
+    school_id: second.schoolId,
+    department_id: second.departmentId,
+    name: '12S Physics',
+    join_code: 'TWLVSPHY',
+  });
 }

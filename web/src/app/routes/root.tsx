@@ -7,10 +7,15 @@ export function RootLayout() {
   const navigation = useNavigation();
   return (
     <>
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded-md focus:bg-surface focus:px-3 focus:py-2 focus:font-bold">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:top-2 focus:left-2 focus:z-50 focus:rounded-md focus:bg-surface focus:px-3 focus:py-2 focus:font-bold"
+      >
         Skip to the page content
       </a>
-      {navigation.state === 'loading' ? <div role="progressbar" aria-label="Loading the page" className="fixed inset-x-0 top-0 z-40 h-1 animate-pulse bg-teal" /> : null}
+      {navigation.state === 'loading' ? (
+        <div role="progressbar" aria-label="Loading the page" className="fixed inset-x-0 top-0 z-40 h-1 animate-pulse bg-teal" />
+      ) : null}
       <Outlet />
     </>
   );
@@ -34,7 +39,9 @@ export function RouteError() {
       <div className="max-w-2xl">
         <h1 className="text-3xl">This page stopped working</h1>
         <p className="mt-3">{describe(error)}</p>
-        <p className="mt-2 text-ink-muted">Nothing you saved before this is lost. Reloading usually helps; if it keeps happening, tell your school admin what you were doing.</p>
+        <p className="mt-2 text-ink-muted">
+          Nothing you saved before this is lost. Reloading usually helps; if it keeps happening, tell your school admin what you were doing.
+        </p>
         <Button className="mt-5" onClick={() => window.location.reload()}>
           Reload the page
         </Button>

@@ -24,8 +24,7 @@ export const buttonVariants = cva(
   },
 );
 
-export type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> &
-  VariantProps<typeof buttonVariants> & { busy?: boolean };
+export type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & VariantProps<typeof buttonVariants> & { busy?: boolean };
 
 /** A button; `busy` disables it and shows a spinner while its request is on the way. */
 export function Button({ className, variant, size, busy = false, disabled, children, type = 'button', ...props }: ButtonProps) {

@@ -43,7 +43,12 @@ export function DataTable<T>({ data, columns, caption, getRowId, rowClassName, e
           {table.getHeaderGroups().map((group) => (
             <tr role="row" key={group.id}>
               {group.headers.map((header) => (
-                <th role="columnheader" key={header.id} scope="col" className="border-b border-line px-4 py-2.5 text-sm font-bold whitespace-nowrap text-ink">
+                <th
+                  role="columnheader"
+                  key={header.id}
+                  scope="col"
+                  className="border-b border-line px-4 py-2.5 text-sm font-bold whitespace-nowrap text-ink"
+                >
                   {header.isPlaceholder ? null : flexRender(header.column.columnDef.header, header.getContext())}
                 </th>
               ))}
@@ -63,7 +68,12 @@ export function DataTable<T>({ data, columns, caption, getRowId, rowClassName, e
                 {row.getVisibleCells().map((cell) => {
                   const label = headerLabel(cell.column.columnDef.header);
                   return (
-                    <td role="cell" key={cell.id} data-label={label} className={cn('px-4 py-3', label ? STACK_CELL_LABELLED : STACK_CELL_PLAIN)}>
+                    <td
+                      role="cell"
+                      key={cell.id}
+                      data-label={label}
+                      className={cn('px-4 py-3', label ? STACK_CELL_LABELLED : STACK_CELL_PLAIN)}
+                    >
                       {flexRender(cell.column.columnDef.cell, cell.getContext())}
                     </td>
                   );

@@ -14,7 +14,8 @@ export function EmailAddress({ email, className }: { email: string; className?: 
       ) : (
         <Fragment>
           {email.slice(0, at + 1)}
-          <wbr />
+          {/* Chromium breaks at <wbr> even under white-space: nowrap: offer the break on phones only. */}
+          <wbr className="sm:hidden" />
           {email.slice(at + 1)}
         </Fragment>
       )}

@@ -15,14 +15,52 @@ export const inputVariants = cva(
 
 type Common = { invalid?: boolean; mono?: boolean };
 
-export function Input({ className, invalid = false, mono = false, ref, ...props }: InputHTMLAttributes<HTMLInputElement> & Common & { ref?: Ref<HTMLInputElement> }) {
-  return <input ref={ref} aria-invalid={invalid || undefined} className={cn(inputVariants({ invalid, mono }), 'min-h-11 py-2', className)} {...props} />;
+export function Input({
+  className,
+  invalid = false,
+  mono = false,
+  ref,
+  ...props
+}: InputHTMLAttributes<HTMLInputElement> & Common & { ref?: Ref<HTMLInputElement> }) {
+  return (
+    <input
+      ref={ref}
+      aria-invalid={invalid || undefined}
+      className={cn(inputVariants({ invalid, mono }), 'min-h-11 py-2', className)}
+      {...props}
+    />
+  );
 }
 
-export function Textarea({ className, invalid = false, mono = false, ref, ...props }: TextareaHTMLAttributes<HTMLTextAreaElement> & Common & { ref?: Ref<HTMLTextAreaElement> }) {
-  return <textarea ref={ref} aria-invalid={invalid || undefined} className={cn(inputVariants({ invalid, mono }), 'py-2', className)} {...props} />;
+export function Textarea({
+  className,
+  invalid = false,
+  mono = false,
+  ref,
+  ...props
+}: TextareaHTMLAttributes<HTMLTextAreaElement> & Common & { ref?: Ref<HTMLTextAreaElement> }) {
+  return (
+    <textarea
+      ref={ref}
+      aria-invalid={invalid || undefined}
+      className={cn(inputVariants({ invalid, mono }), 'py-2', className)}
+      {...props}
+    />
+  );
 }
 
-export function Select({ className, invalid = false, ref, ...props }: SelectHTMLAttributes<HTMLSelectElement> & { invalid?: boolean; ref?: Ref<HTMLSelectElement> }) {
-  return <select ref={ref} aria-invalid={invalid || undefined} className={cn(inputVariants({ invalid }), 'min-h-11 py-2', className)} {...props} />;
+export function Select({
+  className,
+  invalid = false,
+  ref,
+  ...props
+}: SelectHTMLAttributes<HTMLSelectElement> & { invalid?: boolean; ref?: Ref<HTMLSelectElement> }) {
+  return (
+    <select
+      ref={ref}
+      aria-invalid={invalid || undefined}
+      className={cn(inputVariants({ invalid }), 'min-h-11 py-2', className)}
+      {...props}
+    />
+  );
 }

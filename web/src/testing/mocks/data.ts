@@ -41,7 +41,14 @@ export function buildClassDetail(overrides: Partial<ClassDetailDto> = {}): Class
 }
 
 export function buildStudentClass(overrides: Partial<StudentClassDto> = {}): StudentClassDto {
-  return { id: nextId(), name: 'Year 10 Physics (test)', departmentName: 'Physics', teacherName: 'Ada Quill', enrolledAt: '2025-01-06T09:00:00.000Z', ...overrides };
+  return {
+    id: nextId(),
+    name: 'Year 10 Physics (test)',
+    departmentName: 'Physics',
+    teacherName: 'Ada Quill',
+    enrolledAt: '2025-01-06T09:00:00.000Z',
+    ...overrides,
+  };
 }
 
 export function buildPerson(overrides: Partial<PersonDto> = {}): PersonDto {

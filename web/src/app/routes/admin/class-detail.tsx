@@ -103,7 +103,11 @@ export default function ClassDetailRoute() {
                 onPick={(userIds) => enrol.mutateAsync({ classId, userIds }).then(refreshPeople)}
               />
               {enrol.isError ? <ErrorBanner error={enrol.error} title="Nobody was enrolled" /> : null}
-              {enrol.isSuccess ? <p aria-live="polite" className="font-bold text-success">Enrolled. The list of students is up to date.</p> : null}
+              {enrol.isSuccess ? (
+                <p aria-live="polite" className="font-bold text-success">
+                  Enrolled. The list of students is up to date.
+                </p>
+              ) : null}
             </Card>
           </div>
         </>

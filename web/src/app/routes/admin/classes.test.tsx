@@ -17,7 +17,9 @@ describe('admin classes', () => {
     let teacherQuery = '';
     server.use(
       http.get('/api/admin/classes', () => HttpResponse.json({ classes: [] })),
-      http.get('/api/admin/departments', () => HttpResponse.json({ departments: [{ id: DEPT_ID, name: 'Physics', classCount: 0, memberCount: 1 }] })),
+      http.get('/api/admin/departments', () =>
+        HttpResponse.json({ departments: [{ id: DEPT_ID, name: 'Physics', classCount: 0, memberCount: 1 }] }),
+      ),
       http.get('/api/admin/people', ({ request }) => {
         teacherQuery = new URL(request.url).search;
         return HttpResponse.json({ people: [teacher], total: 1, page: 1, pageSize: 100 });
@@ -58,7 +60,10 @@ describe('admin classes', () => {
     signInAs(buildMe(['admin']));
     const rowan = buildPerson({ name: 'Rowan Ashby', email: 'rowan@brackenmoor.example' });
     const mira = buildPerson({ name: 'Mira Okafor', email: 'mira@brackenmoor.example' });
-    let detail: ClassDetailDto = buildClassDetail({ name: '10B Physics', students: [{ userId: mira.userId, name: mira.name, email: mira.email, enrolledAt: '2025-01-06T09:00:00.000Z' }] });
+    let detail: ClassDetailDto = buildClassDetail({
+      name: '10B Physics',
+      students: [{ userId: mira.userId, name: mira.name, email: mira.email, enrolledAt: '2025-01-06T09:00:00.000Z' }],
+    });
     let enrolBody: unknown;
     let removed = '';
     server.use(
@@ -66,7 +71,13 @@ describe('admin classes', () => {
       http.get('/api/admin/people', () => HttpResponse.json({ people: [rowan, mira], total: 2, page: 1, pageSize: 50 })),
       http.post(`/api/admin/classes/${detail.id}/enrolments`, async ({ request }) => {
         enrolBody = await request.json();
-        detail = { ...detail, students: [...detail.students, { userId: rowan.userId, name: rowan.name, email: rowan.email, enrolledAt: '2025-02-01T09:00:00.000Z' }] };
+        detail = {
+          ...detail,
+          students: [
+            ...detail.students,
+            { userId: rowan.userId, name: rowan.name, email: rowan.email, enrolledAt: '2025-02-01T09:00:00.000Z' },
+          ],
+        };
         return HttpResponse.json(detail);
       }),
       http.delete(`/api/admin/classes/${detail.id}/enrolments/:userId`, ({ params }) => {

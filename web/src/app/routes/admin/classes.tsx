@@ -17,7 +17,10 @@ export default function ClassesRoute() {
   const teacherOptions = (teachers.data?.people ?? []).map((person) => ({ id: person.userId, name: `${person.name} (${person.email})` }));
   return (
     <>
-      <PageHeader title="Classes" description="Each class has a teacher, a department and a join code. Open a class to enrol or remove students." />
+      <PageHeader
+        title="Classes"
+        description="Each class has a teacher, a department and a join code. Open a class to enrol or remove students."
+      />
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
         <div className="min-w-0">
           {classes.isPending ? <Loading label="Loading classes…" /> : null}

@@ -11,7 +11,10 @@ export default function DepartmentsRoute() {
   const departments = useDepartments();
   return (
     <>
-      <PageHeader title="Departments" description="Coordinators see every class of their department; substitutes see the departments they cover." />
+      <PageHeader
+        title="Departments"
+        description="Coordinators see every class of their department; substitutes see the departments they cover."
+      />
       <div className="grid gap-8 lg:grid-cols-[1fr_22rem]">
         <div className="min-w-0">
           {departments.isPending ? <Loading label="Loading departments…" /> : null}

@@ -26,7 +26,9 @@ describe('invite form', () => {
     mockLists();
     server.use(
       http.post('/api/admin/invitations', () =>
-        apiError(400, 'validation_failed', 'The invitation has 1 problem.', [{ path: 'email', message: 'That domain is not one of the school’s.' }]),
+        apiError(400, 'validation_failed', 'The invitation has 1 problem.', [
+          { path: 'email', message: 'That domain is not one of the school’s.' },
+        ]),
       ),
     );
     const { user } = renderApp('/admin/people/invite');
@@ -42,7 +44,11 @@ describe('invite form', () => {
   it('puts a 409 already_member next to the e-mail address', async () => {
     signInAs(buildMe(['admin']));
     mockLists();
-    server.use(http.post('/api/admin/invitations', () => apiError(409, 'already_member', 'rowan@brackenmoor.example is already a member of this school.')));
+    server.use(
+      http.post('/api/admin/invitations', () =>
+        apiError(409, 'already_member', 'rowan@brackenmoor.example is already a member of this school.'),
+      ),
+    );
     const { user } = renderApp('/admin/people/invite');
     await fillAndSend(user);
     expect(await screen.findByText('rowan@brackenmoor.example is already a member of this school.')).toBeInTheDocument();
@@ -66,12 +72,20 @@ describe('invite form', () => {
     server.use(
       http.post('/api/admin/invitations', async ({ request }) => {
         body = await request.json();
-        return HttpResponse.json(buildPerson({ name: 'Rowan Ashby', email: 'rowan@brackenmoor.example', status: 'invited' }), { status: 201 });
+        return HttpResponse.json(buildPerson({ name: 'Rowan Ashby', email: 'rowan@brackenmoor.example', status: 'invited' }), {
+          status: 201,
+        });
       }),
     );
     const { user } = renderApp('/admin/people/invite');
     await fillAndSend(user);
     expect(await screen.findByText('Invitation sent')).toBeInTheDocument();
-    expect(body).toEqual({ email: 'rowan@brackenmoor.example', name: 'Rowan Ashby', roles: ['student'], departmentId: null, classId: null });
+    expect(body).toEqual({
+      email: 'rowan@brackenmoor.example',
+      name: 'Rowan Ashby',
+      roles: ['student'],
+      departmentId: null,
+      classId: null,
+    });
   });
 });

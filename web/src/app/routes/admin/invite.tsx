@@ -11,8 +11,13 @@ export default function InviteRoute() {
   const classes = useAdminClasses();
   return (
     <>
-      <PageHeader title="Invite a person" description="They get an e-mail with a sign-in link, and appear under People as invited until they sign in." />
-      {departments.isError ? <ErrorBanner error={departments.error} title="Departments could not be loaded for the form" className="mb-4" /> : null}
+      <PageHeader
+        title="Invite a person"
+        description="They get an e-mail with a sign-in link, and appear under People as invited until they sign in."
+      />
+      {departments.isError ? (
+        <ErrorBanner error={departments.error} title="Departments could not be loaded for the form" className="mb-4" />
+      ) : null}
       {classes.isError ? <ErrorBanner error={classes.error} title="Classes could not be loaded for the form" className="mb-4" /> : null}
       <Card>
         <InviteForm departments={departments.data?.departments ?? []} classes={classes.data?.classes ?? []} />

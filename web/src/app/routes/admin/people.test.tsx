@@ -9,7 +9,12 @@ import { renderApp, signInAs } from '@/testing/test-utils';
 
 const admin = buildPerson({ name: 'Ada Quill', email: 'ada.quill@brackenmoor.example', roles: ['admin', 'teacher'] });
 const invited = buildPerson({ name: 'Rowan Ashby', email: 'rowan@brackenmoor.example', status: 'invited', roles: ['student'] });
-const locked = buildPerson({ name: 'Lane Vireo', email: 'lane@brackenmoor.example', roles: ['teacher'], abilities: { changeRoles: false } });
+const locked = buildPerson({
+  name: 'Lane Vireo',
+  email: 'lane@brackenmoor.example',
+  roles: ['teacher'],
+  abilities: { changeRoles: false },
+});
 
 function mockPeople(people: PersonDto[]) {
   const queries: string[] = [];

@@ -13,8 +13,24 @@ const invalidPreview: RosterPreviewDto = {
   valid: false,
   errors: [],
   rows: [
-    { line: 2, email: 'rowan@brackenmoor.example', name: 'Rowan Ashby', roles: ['student'], className: 'Year 10', errors: [], existing: false },
-    { line: 3, email: 'not-an-email', name: 'Mira Okafor', roles: ['wizard'], className: null, errors: ['Enter a valid e-mail address.', 'Unknown role “wizard”.'], existing: false },
+    {
+      line: 2,
+      email: 'rowan@brackenmoor.example',
+      name: 'Rowan Ashby',
+      roles: ['student'],
+      className: 'Year 10',
+      errors: [],
+      existing: false,
+    },
+    {
+      line: 3,
+      email: 'not-an-email',
+      name: 'Mira Okafor',
+      roles: ['wizard'],
+      className: null,
+      errors: ['Enter a valid e-mail address.', 'Unknown role “wizard”.'],
+      existing: false,
+    },
   ],
 };
 const validPreview: RosterPreviewDto = { valid: true, errors: [], rows: [invalidPreview.rows[0]!] };

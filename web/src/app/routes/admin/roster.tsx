@@ -5,7 +5,10 @@ import { RosterImport } from '@/features/roster/components/roster-import';
 export default function RosterRoute() {
   return (
     <>
-      <PageHeader title="Import a roster" description="Add many people at once from a CSV file. Pinfield checks every row first and saves nothing until all of them are right." />
+      <PageHeader
+        title="Import a roster"
+        description="Add many people at once from a CSV file. Pinfield checks every row first and saves nothing until all of them are right."
+      />
       <RosterImport />
     </>
   );

@@ -7,7 +7,13 @@ import { apiError } from '@/testing/mocks/handlers';
 import { server } from '@/testing/mocks/server';
 import { renderApp, signInAs } from '@/testing/test-utils';
 
-const school: SchoolDto = { id: SCHOOL_ID, name: 'Brackenmoor School (test)', timeZone: 'Europe/London', locale: 'en-GB', emailDomains: ['brackenmoor.example'] };
+const school: SchoolDto = {
+  id: SCHOOL_ID,
+  name: 'Brackenmoor School (test)',
+  timeZone: 'Europe/London',
+  locale: 'en-GB',
+  emailDomains: ['brackenmoor.example'],
+};
 
 describe('school settings', () => {
   it('checks a domain with the shared rule before sending it', async () => {
@@ -44,7 +50,9 @@ describe('school settings', () => {
     server.use(
       http.get('/api/admin/school', () => HttpResponse.json(school)),
       http.patch('/api/admin/school', () =>
-        apiError(400, 'validation_failed', 'The school has 1 problem.', [{ path: 'emailDomains.1', message: 'That domain belongs to another school.' }]),
+        apiError(400, 'validation_failed', 'The school has 1 problem.', [
+          { path: 'emailDomains.1', message: 'That domain belongs to another school.' },
+        ]),
       ),
     );
     const { user } = renderApp('/admin/school');

@@ -11,7 +11,9 @@ describe('role guard', () => {
     signInAs(buildMe(['student']));
     renderApp('/admin/people');
     expect(await screen.findByRole('heading', { name: 'Not available for your role' })).toBeInTheDocument();
-    expect(screen.getByText(/You are signed in as/)).toHaveTextContent('This page is for the Admin role. You are signed in as Student at Brackenmoor School (test).');
+    expect(screen.getByText(/You are signed in as/)).toHaveTextContent(
+      'This page is for the Admin role. You are signed in as Student at Brackenmoor School (test).',
+    );
     expect(screen.getByRole('link', { name: 'Go to your Student home' })).toHaveAttribute('href', '/student');
     expect(screen.queryByRole('button', { name: /Switch to/ })).not.toBeInTheDocument();
   });
@@ -50,14 +52,18 @@ describe('role guard', () => {
   it('says so when the server cannot be reached', async () => {
     server.use(http.get('/api/me', () => HttpResponse.error()));
     renderApp('/teacher');
-    expect(await screen.findByRole('alert')).toHaveTextContent('Pinfield could not reach its server. Check your network connection and try again.');
+    expect(await screen.findByRole('alert')).toHaveTextContent(
+      'Pinfield could not reach its server. Check your network connection and try again.',
+    );
   });
 
   it('switches role from the header and opens that role’s home; sign-out opens the sign-in page', async () => {
     signInAs(buildMe(['teacher', 'coordinator']));
     server.use(
       http.get('/api/teacher/classes', () => HttpResponse.json({ classes: [] })),
-      http.put('/api/me/active', () => HttpResponse.json(buildMe(['teacher', 'coordinator'], { active: { schoolId: SCHOOL_ID, role: 'coordinator' } }))),
+      http.put('/api/me/active', () =>
+        HttpResponse.json(buildMe(['teacher', 'coordinator'], { active: { schoolId: SCHOOL_ID, role: 'coordinator' } })),
+      ),
       http.get('/api/departments/overview', () => HttpResponse.json({ departments: [] })),
     );
     const { user, router } = renderApp('/teacher');

@@ -20,7 +20,9 @@ export default function CoordinatorHomeRoute() {
         </EmptyState>
       ) : null}
       <div className="flex flex-col gap-8">
-        {overview.data?.departments.map((department) => <DepartmentOverview key={department.id} department={department} />)}
+        {overview.data?.departments.map((department) => (
+          <DepartmentOverview key={department.id} department={department} />
+        ))}
       </div>
       <section aria-labelledby="results-heading" className="mt-10 flex flex-col gap-4">
         <h2 id="results-heading" className="text-2xl">

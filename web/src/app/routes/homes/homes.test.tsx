@@ -10,7 +10,11 @@ import { renderApp, signInAs } from '@/testing/test-utils';
 describe('role homes', () => {
   it('teacher: classes with student counts and join codes, and what will appear under lessons', async () => {
     signInAs(buildMe(['teacher']));
-    server.use(http.get('/api/teacher/classes', () => HttpResponse.json({ classes: [buildClass({ name: '10B Physics', studentCount: 27, joinCode: 'QW3RTY9P' })] })));
+    server.use(
+      http.get('/api/teacher/classes', () =>
+        HttpResponse.json({ classes: [buildClass({ name: '10B Physics', studentCount: 27, joinCode: 'QW3RTY9P' })] }),
+      ),
+    );
     renderApp('/teacher');
     const card = (await screen.findByRole('link', { name: '10B Physics' })).closest('section');
     expect(card).toHaveTextContent('27 students enrolled');

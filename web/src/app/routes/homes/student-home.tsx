@@ -33,8 +33,8 @@ export default function StudentHomeRoute() {
               Your lessons
             </h2>
             <EmptyState icon={<FieldLinesIcon className="size-8" />} title="No lessons set yet">
-              When a teacher assigns a lesson to one of your classes, it appears here with its due date. You will watch the
-              demonstration, and it pauses at each checkpoint for your answer.
+              When a teacher assigns a lesson to one of your classes, it appears here with its due date. You will watch the demonstration,
+              and it pauses at each checkpoint for your answer.
             </EmptyState>
           </section>
         </div>

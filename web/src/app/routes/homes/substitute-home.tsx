@@ -18,8 +18,8 @@ export default function SubstituteHomeRoute() {
         </h2>
         <EmptyState icon={<FieldLinesIcon className="size-8" />} title="No cover plans yet">
           When a colleague sets you a cover plan (a class, the dates, and the lesson to run), it appears here, together with the lessons
-          colleagues share with their department. You can run them with the class, and copy one into your own library without changing
-          the original.
+          colleagues share with their department. You can run them with the class, and copy one into your own library without changing the
+          original.
         </EmptyState>
       </section>
       {overview.isPending ? <Loading label="Loading your departments…" /> : null}
@@ -30,7 +30,9 @@ export default function SubstituteHomeRoute() {
         </EmptyState>
       ) : null}
       <div className="flex flex-col gap-8">
-        {overview.data?.departments.map((department) => <DepartmentOverview key={department.id} department={department} />)}
+        {overview.data?.departments.map((department) => (
+          <DepartmentOverview key={department.id} department={department} />
+        ))}
       </div>
     </>
   );

@@ -25,7 +25,10 @@ export default function TeacherClassRoute() {
       {detail.isError ? <ErrorBanner error={detail.error} title="This class could not be loaded" /> : null}
       {detail.data ? (
         <>
-          <PageHeader title={detail.data.name} description={detail.data.departmentName ? <Badge>{detail.data.departmentName}</Badge> : undefined} />
+          <PageHeader
+            title={detail.data.name}
+            description={detail.data.departmentName ? <Badge>{detail.data.departmentName}</Badge> : undefined}
+          />
           <div className="mb-6">
             <JoinCode code={detail.data.joinCode} className={detail.data.name} />
           </div>

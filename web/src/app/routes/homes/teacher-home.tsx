@@ -28,9 +28,8 @@ export default function TeacherHomeRoute() {
           Your lessons
         </h2>
         <EmptyState icon={<FieldLinesIcon className="size-8" />} title="No lessons yet">
-          Recordings of your demonstrations, and the lessons you build from them by pinning checkpoints on the timeline, will appear
-          here, ready to assign to the classes above. Uploading recordings and the lesson builder are not part of this version of
-          Pinfield yet.
+          Recordings of your demonstrations, and the lessons you build from them by pinning checkpoints on the timeline, will appear here,
+          ready to assign to the classes above. Uploading recordings and the lesson builder are not part of this version of Pinfield yet.
         </EmptyState>
       </section>
     </>

@@ -57,7 +57,10 @@ describe('landing page', () => {
     server.use(
       http.post('/api/auth/email-link', async ({ request }) => {
         body = await request.json();
-        return HttpResponse.json({ message: 'If that address belongs to a Pinfield account, a sign-in link is on its way.' }, { status: 202 });
+        return HttpResponse.json(
+          { message: 'If that address belongs to a Pinfield account, a sign-in link is on its way.' },
+          { status: 202 },
+        );
       }),
     );
     const { user } = renderApp('/');
@@ -76,7 +79,14 @@ describe('landing page', () => {
   });
 
   it('shows a rate limit as a banner', async () => {
-    server.use(http.post('/api/auth/email-link', () => HttpResponse.json({ error: { code: 'rate_limited', message: 'Too many sign-in requests for this address: wait 15 minutes.' } }, { status: 429 })));
+    server.use(
+      http.post('/api/auth/email-link', () =>
+        HttpResponse.json(
+          { error: { code: 'rate_limited', message: 'Too many sign-in requests for this address: wait 15 minutes.' } },
+          { status: 429 },
+        ),
+      ),
+    );
     const { user } = renderApp('/');
     await user.type(await screen.findByLabelText(/School e-mail address/), 'ada.quill@brackenmoor.example');
     await user.click(screen.getByRole('button', { name: /E-mail me a sign-in link/ }));

@@ -32,8 +32,8 @@ export default function LandingRoute() {
             <h1 className="mt-2 text-4xl sm:text-5xl">Demonstrations that stop and ask at the moment that matters</h1>
           </div>
           <p className="max-w-2xl text-lg">
-            Pinfield turns a recorded classroom demonstration into a lesson: checkpoints pinned where students usually slip, answers
-            graded with the physics they need, and a clear picture of where each class stopped understanding.
+            Pinfield turns a recorded classroom demonstration into a lesson: checkpoints pinned where students usually slip, answers graded
+            with the physics they need, and a clear picture of where each class stopped understanding.
           </p>
           {me.isError ? (
             <p role="alert" className="font-bold text-danger">

@@ -51,6 +51,8 @@ describe('e-mail sign-in link page', () => {
     expect(await screen.findByRole('alert')).toHaveTextContent('This sign-in link has expired or was already used. Request a new one.');
     expect(screen.getByRole('heading', { name: 'Request a new sign-in link' })).toBeInTheDocument();
     expect(screen.getByRole('button', { name: /Send a new link/ })).toBeInTheDocument();
+    // The refused link cannot work again, so its button is gone.
+    expect(screen.queryByRole('button', { name: 'Sign in to Pinfield' })).not.toBeInTheDocument();
   });
 
   it('explains a damaged link without calling the API', async () => {

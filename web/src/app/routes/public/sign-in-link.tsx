@@ -6,6 +6,7 @@ import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ErrorBanner } from '@/components/ui/error-banner';
 import { roleHome } from '@/config/paths';
+import { isApiError } from '@/lib/api-client';
 import { useVerifyEmailLink } from '@/features/auth/api/verify-email-link';
 import { EmailLinkForm } from '@/features/auth/components/email-link-form';
 
@@ -24,13 +25,15 @@ export default function SignInLinkRoute() {
     verify.mutate(parsed.data, { onSuccess: (me) => void navigate(roleHome(me.active.role), { replace: true }) });
   }
 
+  // A used or expired link cannot work again: only a new link helps. Other failures (network) may be retried.
+  const linkRefused = verify.isError && isApiError(verify.error) && verify.error.code === 'link_invalid';
   const needsNewLink = !parsed.success || verify.isError;
   return (
     <PublicLayout>
       <div className="mx-auto flex max-w-xl flex-col gap-6">
         <Card className="flex flex-col gap-4">
           <h1 className="text-3xl">Finish signing in</h1>
-          {parsed.success ? (
+          {parsed.success && !linkRefused ? (
             <>
               <p>Press the button to finish signing in on this device. The link then stops working, so keep this tab until you are in.</p>
               <div>
@@ -39,11 +42,12 @@ export default function SignInLinkRoute() {
                 </Button>
               </div>
             </>
-          ) : (
+          ) : !parsed.success ? (
             <Banner tone="error" title="This link cannot be used">
-              {parsed.error.issues[0]?.message ?? 'The sign-in link is incomplete.'} Copy the whole link from the e-mail, or request a new one below.
+              {parsed.error.issues[0]?.message ?? 'The sign-in link is incomplete.'} Copy the whole link from the e-mail, or request a new
+              one below.
             </Banner>
-          )}
+          ) : null}
           {verify.isError ? <ErrorBanner error={verify.error} title="You are not signed in" /> : null}
         </Card>
         {needsNewLink ? (

@@ -11,8 +11,8 @@ export function DemoAccounts() {
         Demo accounts
       </h2>
       <p className="mt-1 text-ink">
-        This copy of Pinfield runs with invented demo data. Choose <strong>Continue with Google</strong>: the local sign-in stand-in
-        lists these accounts, and you pick one there.
+        This copy of Pinfield runs with invented demo data. Choose <strong>Continue with Google</strong>: the local sign-in stand-in lists
+        these accounts, and you pick one there.
       </p>
       <ul className="mt-3 divide-y divide-line rounded-md border border-line bg-surface">
         {config.data.demoAccounts.map((account) => (

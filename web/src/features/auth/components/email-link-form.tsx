@@ -34,7 +34,11 @@ export function EmailLinkForm({ submitLabel = 'E-mail me a sign-in link' }: { su
 
   return (
     <form onSubmit={(event) => void onSubmit(event)} noValidate className="flex flex-col gap-3">
-      <Field label="School e-mail address" error={errors.email?.message} hint={`The link works once, for ${LIMITS.signInLinkMinutes} minutes.`}>
+      <Field
+        label="School e-mail address"
+        error={errors.email?.message}
+        hint={`The link works once, for ${LIMITS.signInLinkMinutes} minutes.`}
+      >
         {(control) => <Input {...control} {...form.register('email')} type="email" autoComplete="email" inputMode="email" mono />}
       </Field>
       <div>
@@ -44,9 +48,17 @@ export function EmailLinkForm({ submitLabel = 'E-mail me a sign-in link' }: { su
         </Button>
       </div>
       <LiveRegion>
-        {mutation.isSuccess ? <Banner tone="success" title="Check your inbox">{mutation.data.message}</Banner> : null}
+        {mutation.isSuccess ? (
+          <Banner tone="success" title="Check your inbox">
+            {mutation.data.message}
+          </Banner>
+        ) : null}
       </LiveRegion>
-      {banner ? <Banner tone="error" title="The link was not sent">{banner}</Banner> : null}
+      {banner ? (
+        <Banner tone="error" title="The link was not sent">
+          {banner}
+        </Banner>
+      ) : null}
     </form>
   );
 }

@@ -18,7 +18,10 @@ type FormOutput = z.output<typeof JoinClassRequestSchema>;
 export function JoinForm() {
   const mutation = useJoinByCode();
   const [banner, setBanner] = useState<string | null>(null);
-  const form = useForm<FormInput, unknown, FormOutput>({ resolver: zodResolver(JoinClassRequestSchema), defaultValues: { code: '', email: '', name: '' } });
+  const form = useForm<FormInput, unknown, FormOutput>({
+    resolver: zodResolver(JoinClassRequestSchema),
+    defaultValues: { code: '', email: '', name: '' },
+  });
   const { errors } = form.formState;
 
   const onSubmit = form.handleSubmit(async (values) => {
@@ -34,7 +37,15 @@ export function JoinForm() {
     <form onSubmit={(event) => void onSubmit(event)} noValidate className="flex flex-col gap-4">
       <Field label="Class code" hint="8 letters and digits, from your teacher." error={errors.code?.message}>
         {(control) => (
-          <Input {...control} {...form.register('code')} autoComplete="off" autoCapitalize="characters" spellCheck={false} mono className="uppercase tracking-widest" />
+          <Input
+            {...control}
+            {...form.register('code')}
+            autoComplete="off"
+            autoCapitalize="characters"
+            spellCheck={false}
+            mono
+            className="uppercase tracking-widest"
+          />
         )}
       </Field>
       <Field label="Your name" hint="As your teacher should see it." error={errors.name?.message}>
@@ -49,9 +60,17 @@ export function JoinForm() {
         </Button>
       </div>
       <LiveRegion>
-        {mutation.isSuccess ? <Banner tone="success" title="Request received">{mutation.data.message}</Banner> : null}
+        {mutation.isSuccess ? (
+          <Banner tone="success" title="Request received">
+            {mutation.data.message}
+          </Banner>
+        ) : null}
       </LiveRegion>
-      {banner ? <Banner tone="error" title="The request was not sent">{banner}</Banner> : null}
+      {banner ? (
+        <Banner tone="error" title="The request was not sent">
+          {banner}
+        </Banner>
+      ) : null}
     </form>
   );
 }

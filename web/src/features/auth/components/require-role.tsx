@@ -23,8 +23,7 @@ function RoleMismatch({ me, role }: { me: MeDto; role: Role }) {
     <div className="mx-auto max-w-2xl py-6">
       <h1 className="text-3xl">Not available for your role</h1>
       <p className="mt-3">
-        This page is for the <strong>{ROLE_LABELS[role]}</strong> role. You are signed in as{' '}
-        <strong>{ROLE_LABELS[me.active.role]}</strong>
+        This page is for the <strong>{ROLE_LABELS[role]}</strong> role. You are signed in as <strong>{ROLE_LABELS[me.active.role]}</strong>
         {membership ? ` at ${membership.schoolName}` : ''}.
       </p>
       {holdsRole ? (
@@ -42,7 +41,11 @@ function RoleMismatch({ me, role }: { me: MeDto; role: Role }) {
           Go to your {ROLE_LABELS[me.active.role]} home
         </Link>
       </div>
-      {mutation.isError ? <Banner tone="error" title="Could not switch role" className="mt-4">{mutation.error.message}</Banner> : null}
+      {mutation.isError ? (
+        <Banner tone="error" title="Could not switch role" className="mt-4">
+          {mutation.error.message}
+        </Banner>
+      ) : null}
     </div>
   );
 }

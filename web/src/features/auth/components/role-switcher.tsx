@@ -33,10 +33,7 @@ export function RoleSwitcher({ me }: { me: MeDto }) {
   function change(value: string) {
     const choice = choices.find((option) => option.value === value);
     if (!choice) return;
-    mutation.mutate(
-      { schoolId: choice.schoolId, role: choice.role },
-      { onSuccess: (next) => void navigate(roleHome(next.active.role)) },
-    );
+    mutation.mutate({ schoolId: choice.schoolId, role: choice.role }, { onSuccess: (next) => void navigate(roleHome(next.active.role)) });
   }
 
   return (
@@ -45,7 +42,13 @@ export function RoleSwitcher({ me }: { me: MeDto }) {
         <label htmlFor={id} className="text-sm font-bold whitespace-nowrap">
           Acting as
         </label>
-        <Select id={id} value={current} disabled={mutation.isPending} onChange={(event) => change(event.target.value)} className="min-h-9 w-auto min-w-0 max-w-full py-1 text-sm">
+        <Select
+          id={id}
+          value={current}
+          disabled={mutation.isPending}
+          onChange={(event) => change(event.target.value)}
+          className="min-h-9 w-auto min-w-0 max-w-full py-1 text-sm"
+        >
           {choices.map((choice) => (
             <option key={choice.value} value={choice.value}>
               {choice.label}

@@ -10,7 +10,12 @@ export function SignOutButton() {
   const mutation = useSignOut();
   return (
     <span className="inline-flex flex-col items-end">
-      <Button variant="ghost" size="sm" busy={mutation.isPending} onClick={() => mutation.mutate(undefined, { onSuccess: () => void navigate(paths.signIn, { replace: true }) })}>
+      <Button
+        variant="ghost"
+        size="sm"
+        busy={mutation.isPending}
+        onClick={() => mutation.mutate(undefined, { onSuccess: () => void navigate(paths.signIn, { replace: true }) })}
+      >
         <SignOutIcon className="size-4" />
         Sign out
       </Button>

@@ -11,15 +11,34 @@ function columnsFor(classHref: (classId: string) => string): ColumnDef<ClassDto,
       id: 'name',
       header: 'Class',
       cell: ({ row }) => (
-        <Link to={classHref(row.original.id)} className="font-bold text-ink underline decoration-copper decoration-2 underline-offset-4 hover:text-copper">
+        <Link
+          to={classHref(row.original.id)}
+          className="font-bold text-ink underline decoration-copper decoration-2 underline-offset-4 hover:text-copper"
+        >
           {row.original.name}
         </Link>
       ),
     }),
-    column.display({ id: 'department', header: 'Department', cell: ({ row }) => row.original.departmentName ?? <span className="text-ink-muted">None</span> }),
-    column.display({ id: 'teacher', header: 'Teacher', cell: ({ row }) => row.original.teacher?.name ?? <span className="text-ink-muted">None</span> }),
-    column.display({ id: 'students', header: 'Students', cell: ({ row }) => <span className="font-mono">{row.original.studentCount}</span> }),
-    column.display({ id: 'code', header: 'Join code', cell: ({ row }) => <code className="font-mono font-bold tracking-wider">{row.original.joinCode}</code> }),
+    column.display({
+      id: 'department',
+      header: 'Department',
+      cell: ({ row }) => row.original.departmentName ?? <span className="text-ink-muted">None</span>,
+    }),
+    column.display({
+      id: 'teacher',
+      header: 'Teacher',
+      cell: ({ row }) => row.original.teacher?.name ?? <span className="text-ink-muted">None</span>,
+    }),
+    column.display({
+      id: 'students',
+      header: 'Students',
+      cell: ({ row }) => <span className="font-mono">{row.original.studentCount}</span>,
+    }),
+    column.display({
+      id: 'code',
+      header: 'Join code',
+      cell: ({ row }) => <code className="font-mono font-bold tracking-wider">{row.original.joinCode}</code>,
+    }),
   ];
 }
 

@@ -19,11 +19,25 @@ type Props = {
 export function ClassRosterTable({ students, clock, caption, renderAction }: Props) {
   const columns: ColumnDef<ClassMemberDto, unknown>[] = [
     column.display({ id: 'name', header: 'Name', cell: ({ row }) => <span className="font-bold">{row.original.name}</span> }),
-    column.display({ id: 'email', header: 'E-mail', cell: ({ row }) => <EmailAddress email={row.original.email} className="sm:whitespace-nowrap" /> }),
-    column.display({ id: 'enrolled', header: 'Enrolled', cell: ({ row }) => <span className="whitespace-nowrap">{formatDate(row.original.enrolledAt, clock)}</span> }),
+    column.display({
+      id: 'email',
+      header: 'E-mail',
+      cell: ({ row }) => <EmailAddress email={row.original.email} className="sm:whitespace-nowrap" />,
+    }),
+    column.display({
+      id: 'enrolled',
+      header: 'Enrolled',
+      cell: ({ row }) => <span className="whitespace-nowrap">{formatDate(row.original.enrolledAt, clock)}</span>,
+    }),
   ];
   if (renderAction) {
-    columns.push(column.display({ id: 'actions', header: () => <span className="sr-only">Actions</span>, cell: ({ row }) => renderAction(row.original) }));
+    columns.push(
+      column.display({
+        id: 'actions',
+        header: () => <span className="sr-only">Actions</span>,
+        cell: ({ row }) => renderAction(row.original),
+      }),
+    );
   }
   return (
     <DataTable

@@ -55,7 +55,11 @@ export function CreateClassForm({ departments, teachers }: { departments: Option
           </Select>
         )}
       </Field>
-      <Field label="Teacher" hint={teachers.length === 0 ? 'Nobody has the Teacher role yet: invite one first.' : undefined} error={errors.teacherId?.message}>
+      <Field
+        label="Teacher"
+        hint={teachers.length === 0 ? 'Nobody has the Teacher role yet: invite one first.' : undefined}
+        error={errors.teacherId?.message}
+      >
         {(control) => (
           <Select {...control} {...form.register('teacherId', { setValueAs: emptyToNull })}>
             <option value="">No teacher yet</option>
@@ -80,7 +84,11 @@ export function CreateClassForm({ departments, teachers }: { departments: Option
           </Banner>
         ) : null}
       </LiveRegion>
-      {banner ? <Banner tone="error" title="The class was not created">{banner}</Banner> : null}
+      {banner ? (
+        <Banner tone="error" title="The class was not created">
+          {banner}
+        </Banner>
+      ) : null}
     </form>
   );
 }

@@ -35,7 +35,15 @@ export function StudentJoinForm() {
     <form onSubmit={(event) => void onSubmit(event)} noValidate className="flex flex-col gap-3">
       <Field label="Class code" hint="8 letters and digits, from your teacher." error={form.formState.errors.code?.message}>
         {(control) => (
-          <Input {...control} {...form.register('code')} autoComplete="off" autoCapitalize="characters" spellCheck={false} mono className="uppercase tracking-widest" />
+          <Input
+            {...control}
+            {...form.register('code')}
+            autoComplete="off"
+            autoCapitalize="characters"
+            spellCheck={false}
+            mono
+            className="uppercase tracking-widest"
+          />
         )}
       </Field>
       <div>
@@ -44,9 +52,17 @@ export function StudentJoinForm() {
         </Button>
       </div>
       <LiveRegion>
-        {mutation.isSuccess ? <Banner tone="success" title={`You joined ${mutation.data.name}`}>It is now in your list of classes.</Banner> : null}
+        {mutation.isSuccess ? (
+          <Banner tone="success" title={`You joined ${mutation.data.name}`}>
+            It is now in your list of classes.
+          </Banner>
+        ) : null}
       </LiveRegion>
-      {banner ? <Banner tone="error" title="You did not join a class">{banner}</Banner> : null}
+      {banner ? (
+        <Banner tone="error" title="You did not join a class">
+          {banner}
+        </Banner>
+      ) : null}
     </form>
   );
 }

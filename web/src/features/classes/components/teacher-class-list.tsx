@@ -11,8 +11,8 @@ export function TeacherClassList({ classes, classHref }: { classes: ClassDto[]; 
   if (classes.length === 0) {
     return (
       <EmptyState icon={<PeopleIcon className="size-8" />} title="No classes yet">
-        Your school admin creates classes and names you as their teacher. Each one then appears here with its join code, which you give
-        to students so they can join.
+        Your school admin creates classes and names you as their teacher. Each one then appears here with its join code, which you give to
+        students so they can join.
       </EmptyState>
     );
   }
@@ -23,7 +23,10 @@ export function TeacherClassList({ classes, classHref }: { classes: ClassDto[]; 
           <Card className="flex h-full flex-col gap-3">
             <div className="flex flex-wrap items-start justify-between gap-2">
               <h3 className="text-xl">
-                <Link to={classHref(item.id)} className="text-ink underline decoration-copper decoration-2 underline-offset-4 hover:text-copper">
+                <Link
+                  to={classHref(item.id)}
+                  className="text-ink underline decoration-copper decoration-2 underline-offset-4 hover:text-copper"
+                >
                   {item.name}
                 </Link>
               </h3>

@@ -43,7 +43,11 @@ export function CreateDepartmentForm() {
         </Button>
       </div>
       <LiveRegion>{mutation.isSuccess ? <Banner tone="success">Department “{mutation.data.name}” created.</Banner> : null}</LiveRegion>
-      {banner ? <Banner tone="error" title="The department was not created">{banner}</Banner> : null}
+      {banner ? (
+        <Banner tone="error" title="The department was not created">
+          {banner}
+        </Banner>
+      ) : null}
     </form>
   );
 }

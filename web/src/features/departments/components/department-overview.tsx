@@ -19,14 +19,26 @@ function roleLabel(role: string): string {
 
 const staffColumns: ColumnDef<Staff, unknown>[] = [
   staffColumn.display({ id: 'name', header: 'Name', cell: ({ row }) => <span className="font-bold">{row.original.name}</span> }),
-  staffColumn.display({ id: 'email', header: 'E-mail', cell: ({ row }) => <EmailAddress email={row.original.email} className="sm:whitespace-nowrap" /> }),
+  staffColumn.display({
+    id: 'email',
+    header: 'E-mail',
+    cell: ({ row }) => <EmailAddress email={row.original.email} className="sm:whitespace-nowrap" />,
+  }),
   staffColumn.display({ id: 'roles', header: 'Roles', cell: ({ row }) => row.original.roles.map(roleLabel).join(', ') }),
 ];
 
 const classColumns: ColumnDef<DeptClass, unknown>[] = [
   classColumn.display({ id: 'name', header: 'Class', cell: ({ row }) => <span className="font-bold">{row.original.name}</span> }),
-  classColumn.display({ id: 'teacher', header: 'Teacher', cell: ({ row }) => row.original.teacher?.name ?? <span className="text-ink-muted">No teacher</span> }),
-  classColumn.display({ id: 'students', header: 'Students', cell: ({ row }) => <span className="font-mono">{row.original.studentCount}</span> }),
+  classColumn.display({
+    id: 'teacher',
+    header: 'Teacher',
+    cell: ({ row }) => row.original.teacher?.name ?? <span className="text-ink-muted">No teacher</span>,
+  }),
+  classColumn.display({
+    id: 'students',
+    header: 'Students',
+    cell: ({ row }) => <span className="font-mono">{row.original.studentCount}</span>,
+  }),
 ];
 
 /** One department as a coordinator or substitute sees it: its staff and its classes with student counts. */
@@ -39,17 +51,29 @@ export function DepartmentOverview({ department }: { department: DepartmentOverv
           {department.name}
         </h2>
         <p className="mt-1 text-ink-muted">
-          {plural(department.staff.length, 'member of staff', 'members of staff')} · {plural(department.classes.length, 'class', 'classes')} ·{' '}
-          {plural(students, 'student')}
+          {plural(department.staff.length, 'member of staff', 'members of staff')} · {plural(department.classes.length, 'class', 'classes')}{' '}
+          · {plural(students, 'student')}
         </p>
       </div>
       <section className="flex flex-col gap-2">
         <h3 className="text-lg">Classes</h3>
-        <DataTable data={department.classes} columns={classColumns} caption={`Classes of ${department.name}`} getRowId={(item) => item.id} empty="This department has no classes yet." />
+        <DataTable
+          data={department.classes}
+          columns={classColumns}
+          caption={`Classes of ${department.name}`}
+          getRowId={(item) => item.id}
+          empty="This department has no classes yet."
+        />
       </section>
       <section className="flex flex-col gap-2">
         <h3 className="text-lg">Staff</h3>
-        <DataTable data={department.staff} columns={staffColumns} caption={`Staff of ${department.name}`} getRowId={(item) => item.id} empty="No staff are in this department yet." />
+        <DataTable
+          data={department.staff}
+          columns={staffColumns}
+          caption={`Staff of ${department.name}`}
+          getRowId={(item) => item.id}
+          empty="No staff are in this department yet."
+        />
       </section>
     </Card>
   );

@@ -89,7 +89,11 @@ export function InviteForm({ departments, classes }: { departments: Option[]; cl
           </Banner>
         ) : null}
       </LiveRegion>
-      {banner ? <Banner tone="error" title="The invitation was not sent">{banner}</Banner> : null}
+      {banner ? (
+        <Banner tone="error" title="The invitation was not sent">
+          {banner}
+        </Banner>
+      ) : null}
     </form>
   );
 }

@@ -23,8 +23,7 @@ function columnsFor(clock: SchoolClock): ColumnDef<PersonDto, unknown>[] {
     column.display({
       id: 'status',
       header: 'Status',
-      cell: ({ row }) =>
-        row.original.status === 'active' ? <Badge tone="success">Active</Badge> : <Badge tone="copper">Invited</Badge>,
+      cell: ({ row }) => (row.original.status === 'active' ? <Badge tone="success">Active</Badge> : <Badge tone="copper">Invited</Badge>),
     }),
     column.display({ id: 'roles', header: 'Roles', cell: ({ row }) => <RoleEditor person={row.original} /> }),
     column.display({
@@ -41,7 +40,9 @@ function columnsFor(clock: SchoolClock): ColumnDef<PersonDto, unknown>[] {
       id: 'lastSignIn',
       header: 'Last sign-in',
       cell: ({ row }) => (
-        <span className="text-sm whitespace-nowrap">{row.original.lastSignInAt ? formatDateTime(row.original.lastSignInAt, clock) : 'Never'}</span>
+        <span className="text-sm whitespace-nowrap">
+          {row.original.lastSignInAt ? formatDateTime(row.original.lastSignInAt, clock) : 'Never'}
+        </span>
       ),
     }),
   ];

@@ -42,7 +42,14 @@ export function StudentPicker({ excludeIds, busy, onPick }: Props) {
         </label>
         <div className="relative">
           <SearchIcon className="pointer-events-none absolute top-3 left-3 size-5 text-ink-muted" />
-          <Input id={searchId} value={search} onChange={(event) => setSearch(event.target.value)} placeholder="Name or e-mail" className="pl-10" type="search" />
+          <Input
+            id={searchId}
+            value={search}
+            onChange={(event) => setSearch(event.target.value)}
+            placeholder="Name or e-mail"
+            className="pl-10"
+            type="search"
+          />
         </div>
       </div>
       {people.isPending ? <Loading label="Loading students…" /> : null}

@@ -29,7 +29,9 @@ export function RosterImport() {
     const file = event.target.files?.[0];
     if (!file) return;
     if (file.size > LIMITS.rosterBytesMax) {
-      setInputError(`“${file.name}” is ${Math.ceil(file.size / 1024)} KB; a roster file is at most ${LIMITS.rosterBytesMax / 1024} KB. Split it into smaller files.`);
+      setInputError(
+        `“${file.name}” is ${Math.ceil(file.size / 1024)} KB; a roster file is at most ${LIMITS.rosterBytesMax / 1024} KB. Split it into smaller files.`,
+      );
       return;
     }
     setInputError(undefined);
@@ -59,18 +61,40 @@ export function RosterImport() {
   return (
     <div className="flex flex-col gap-6">
       <section aria-labelledby="roster-source" className="flex flex-col gap-4">
-        <h2 id="roster-source" className="text-2xl">1. Choose or paste the CSV</h2>
+        <h2 id="roster-source" className="text-2xl">
+          1. Choose or paste the CSV
+        </h2>
         <p>
           The first line names the columns <code className="font-mono">{ROSTER_COLUMNS.join(',')}</code>. Separate several roles with{' '}
           <code className="font-mono">;</code> or <code className="font-mono">|</code>. The class is optional and given by name.
         </p>
         <div className="flex flex-col gap-1">
-          <label htmlFor={fileId} className="font-bold">CSV file</label>
-          <input id={fileId} type="file" accept=".csv,text/csv,text/plain" onChange={(event) => void chooseFile(event)} className="max-w-full text-base file:mr-3 file:min-h-11 file:cursor-pointer file:rounded-md file:border file:border-line-strong file:bg-surface file:px-4 file:font-bold file:text-ink" />
+          <label htmlFor={fileId} className="font-bold">
+            CSV file
+          </label>
+          <input
+            id={fileId}
+            type="file"
+            accept=".csv,text/csv,text/plain"
+            onChange={(event) => void chooseFile(event)}
+            className="max-w-full text-base file:mr-3 file:min-h-11 file:cursor-pointer file:rounded-md file:border file:border-line-strong file:bg-surface file:px-4 file:font-bold file:text-ink"
+          />
         </div>
         <div className="flex flex-col gap-1">
-          <label htmlFor={textId} className="font-bold">Or paste it here</label>
-          <Textarea id={textId} value={csv} onChange={(event) => setCsv(event.target.value)} rows={8} mono spellCheck={false} placeholder={EXAMPLE} invalid={Boolean(inputError)} className="text-sm" />
+          <label htmlFor={textId} className="font-bold">
+            Or paste it here
+          </label>
+          <Textarea
+            id={textId}
+            value={csv}
+            onChange={(event) => setCsv(event.target.value)}
+            rows={8}
+            mono
+            spellCheck={false}
+            placeholder={EXAMPLE}
+            invalid={Boolean(inputError)}
+            className="text-sm"
+          />
           <FieldError message={inputError} />
         </div>
         <div>
@@ -84,10 +108,14 @@ export function RosterImport() {
 
       {current ? (
         <section aria-labelledby="roster-preview" className="flex flex-col gap-4">
-          <h2 id="roster-preview" className="text-2xl">2. Check each row</h2>
+          <h2 id="roster-preview" className="text-2xl">
+            2. Check each row
+          </h2>
           <LiveRegion>
             {current.valid ? (
-              <Banner tone="success" title="Every row is ready">{plural(current.rows.length, 'row')} can be imported.</Banner>
+              <Banner tone="success" title="Every row is ready">
+                {plural(current.rows.length, 'row')} can be imported.
+              </Banner>
             ) : (
               <Banner tone="error" title="Fix the roster before importing">
                 {badRows > 0 ? `${plural(badRows, 'row has', 'rows have')} problems, marked below. ` : ''}
@@ -96,21 +124,33 @@ export function RosterImport() {
             )}
           </LiveRegion>
           {current.errors.length > 0 ? (
-            <ul className="list-disc pl-6 font-bold text-danger">{current.errors.map((message) => <li key={message}>{message}</li>)}</ul>
+            <ul className="list-disc pl-6 font-bold text-danger">
+              {current.errors.map((message) => (
+                <li key={message}>{message}</li>
+              ))}
+            </ul>
           ) : null}
           <RosterPreviewTable rows={current.rows} />
         </section>
       ) : preview ? (
-        <Banner tone="info" title="The text changed since the check">Check the roster again to see the rows as they are now.</Banner>
+        <Banner tone="info" title="The text changed since the check">
+          Check the roster again to see the rows as they are now.
+        </Banner>
       ) : null}
 
       <section aria-labelledby="roster-import" className="flex flex-col gap-3">
-        <h2 id="roster-import" className="text-2xl">3. Import</h2>
+        <h2 id="roster-import" className="text-2xl">
+          3. Import
+        </h2>
         <p className="text-ink-muted">New people are invited by e-mail; students with a class are enrolled in it.</p>
         <div>
-          <Button onClick={runImport} disabled={!canImport} busy={importMutation.isPending}>Import roster</Button>
+          <Button onClick={runImport} disabled={!canImport} busy={importMutation.isPending}>
+            Import roster
+          </Button>
         </div>
-        {!current?.valid && !importMutation.isSuccess ? <p className="text-sm text-ink-muted">Available once a check finds no problems.</p> : null}
+        {!current?.valid && !importMutation.isSuccess ? (
+          <p className="text-sm text-ink-muted">Available once a check finds no problems.</p>
+        ) : null}
         {importMutation.isError ? <ErrorBanner error={importMutation.error} title="Nothing was imported" /> : null}
         <LiveRegion>
           {importMutation.isSuccess ? (

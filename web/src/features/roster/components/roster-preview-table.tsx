@@ -16,7 +16,7 @@ const columns: ColumnDef<RosterRowDto, unknown>[] = [
       row.original.errors.length > 0 ? (
         <div className="flex items-start gap-2 font-bold wrap-anywhere text-danger sm:min-w-52">
           <AlertIcon className="mt-1 size-4 shrink-0" />
-          <ul>
+          <ul className="flex flex-col gap-1">
             {row.original.errors.map((message) => (
               <li key={message}>{message}</li>
             ))}
@@ -35,12 +35,23 @@ const columns: ColumnDef<RosterRowDto, unknown>[] = [
     cell: ({ row }) => (
       <div>
         <div className="font-bold sm:whitespace-nowrap">{row.original.name || '(no name)'}</div>
-        <div className="text-ink-muted">{row.original.email ? <EmailAddress email={row.original.email} className="sm:whitespace-nowrap" /> : '(no e-mail)'}</div>
+        <div className="text-ink-muted">
+          {row.original.email ? <EmailAddress email={row.original.email} className="sm:whitespace-nowrap" /> : '(no e-mail)'}
+        </div>
       </div>
     ),
   }),
   column.display({ id: 'roles', header: 'Roles', cell: ({ row }) => row.original.roles.join(', ') || '—' }),
-  column.display({ id: 'class', header: 'Class', cell: ({ row }) => (row.original.className ? <span className="block sm:min-w-28">{row.original.className}</span> : <span className="text-ink-muted">none</span>) }),
+  column.display({
+    id: 'class',
+    header: 'Class',
+    cell: ({ row }) =>
+      row.original.className ? (
+        <span className="block sm:min-w-28">{row.original.className}</span>
+      ) : (
+        <span className="text-ink-muted">none</span>
+      ),
+  }),
   column.display({
     id: 'existing',
     header: 'In the school',

@@ -49,7 +49,9 @@ export function EmailDomains({ school }: { school: SchoolDto }) {
   return (
     <div className="flex flex-col gap-4">
       {school.emailDomains.length === 0 ? (
-        <p className="text-ink-muted">No domains yet: nobody can join a class by code until you add the domain of your school’s e-mail addresses.</p>
+        <p className="text-ink-muted">
+          No domains yet: nobody can join a class by code until you add the domain of your school’s e-mail addresses.
+        </p>
       ) : (
         <ul className="flex flex-col divide-y divide-line rounded-md border border-line bg-surface">
           {school.emailDomains.map((domain) => (
@@ -60,7 +62,12 @@ export function EmailDomains({ school }: { school: SchoolDto }) {
                 size="sm"
                 disabled={mutation.isPending}
                 aria-label={`Remove ${domain}`}
-                onClick={() => void save(school.emailDomains.filter((item) => item !== domain), `${domain} removed.`)}
+                onClick={() =>
+                  void save(
+                    school.emailDomains.filter((item) => item !== domain),
+                    `${domain} removed.`,
+                  )
+                }
               >
                 <CloseIcon className="size-4" />
                 Remove
@@ -70,7 +77,12 @@ export function EmailDomains({ school }: { school: SchoolDto }) {
         </ul>
       )}
       <form onSubmit={(event) => void onAdd(event)} noValidate className="flex flex-col gap-3 sm:flex-row sm:items-start">
-        <Field label="Add a domain" hint="Like school.example, without @ or https://." error={form.formState.errors.domain?.message} className="flex-1">
+        <Field
+          label="Add a domain"
+          hint="Like school.example, without @ or https://."
+          error={form.formState.errors.domain?.message}
+          className="flex-1"
+        >
           {(control) => <Input {...control} {...form.register('domain')} mono autoComplete="off" spellCheck={false} />}
         </Field>
         <Button type="submit" busy={mutation.isPending} className="sm:mt-[3.25rem]">
