@@ -1,8 +1,8 @@
-import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { defaultRole, type Role } from '../../core/roles';
 import { demoAccounts, type DemoPerson } from '../../api/src/seed/demo-roster';
 import { baseUrl, expectOnlyLoopback, openPage, screenshot } from './support/browser';
+import { signInWithPicker as signIn } from './support/sign-in';
 
 const SIZES = [
   { name: 'desktop', width: 1280, height: 800, mobile: false },
@@ -16,16 +16,6 @@ const HOMES: Record<Role, { path: string; heading: (person: DemoPerson) => strin
   substitute: { path: '/substitute', heading: () => 'Your cover' },
   admin: { path: '/admin/people', heading: () => 'People' },
 };
-
-/** Signs in through the landing page's Google button and the OpenID Connect stand-in's account picker. */
-async function signIn(page: Page, email: string): Promise<void> {
-  await page.goto(`${baseUrl}/`, { waitUntil: 'load' });
-  await page.getByRole('link', { name: 'Continue with Google' }).click();
-  const account = page.locator(`[data-account-email="${email}"]`);
-  await account.waitFor({ state: 'visible' });
-  await account.click();
-  await page.waitForURL((url) => url.origin === baseUrl && url.pathname !== '/', { timeout: 20_000 });
-}
 
 function slug(text: string): string {
   return text

@@ -19,4 +19,9 @@ describe('sign-in page', () => {
     expect(await screen.findByRole('heading', { name: 'Sign in', level: 1 })).toBeInTheDocument();
     expect(screen.queryByRole('alert')).not.toBeInTheDocument();
   });
+
+  it('fills in the address an invitation links with', async () => {
+    renderApp('/signin?email=new.teacher%40fernhollow.example');
+    expect(await screen.findByLabelText('School e-mail address')).toHaveValue('new.teacher@fernhollow.example');
+  });
 });

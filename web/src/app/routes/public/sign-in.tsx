@@ -26,7 +26,8 @@ export default function SignInRoute() {
             {signInErrorMessage(error)}
           </Banner>
         ) : null}
-        <SignInOptions headingLevel={1} />
+        {/* Invitation e-mails link here with the invited address filled in. */}
+        <SignInOptions headingLevel={1} email={params.get('email') ?? undefined} />
         <DemoAccounts />
       </div>
     </PublicLayout>

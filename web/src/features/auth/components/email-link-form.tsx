@@ -17,10 +17,10 @@ type FormInput = z.input<typeof EmailLinkRequestSchema>;
 type FormOutput = z.output<typeof EmailLinkRequestSchema>;
 
 /** Asks for a sign-in link by e-mail. The answer is the API's neutral notice, whether or not the address is known. */
-export function EmailLinkForm({ submitLabel = 'E-mail me a sign-in link' }: { submitLabel?: string }) {
+export function EmailLinkForm({ submitLabel = 'E-mail me a sign-in link', defaultEmail = '' }: { submitLabel?: string; defaultEmail?: string }) {
   const mutation = useRequestEmailLink();
   const [banner, setBanner] = useState<string | null>(null);
-  const form = useForm<FormInput, unknown, FormOutput>({ resolver: zodResolver(EmailLinkRequestSchema), defaultValues: { email: '' } });
+  const form = useForm<FormInput, unknown, FormOutput>({ resolver: zodResolver(EmailLinkRequestSchema), defaultValues: { email: defaultEmail } });
   const { errors } = form.formState;
 
   const onSubmit = form.handleSubmit(async (values) => {

@@ -5,7 +5,7 @@ import { EmailLinkForm } from './email-link-form';
 import { GoogleSignIn } from './google-sign-in';
 
 /** The two ways in: a Google account, or a one-time link sent to a school e-mail address. */
-export function SignInOptions({ headingLevel = 2 }: { headingLevel?: 1 | 2 }) {
+export function SignInOptions({ headingLevel = 2, email }: { headingLevel?: 1 | 2; email?: string }) {
   const Heading = headingLevel === 1 ? 'h1' : 'h2';
   return (
     <Card className="flex flex-col gap-5" aria-labelledby="sign-in-heading">
@@ -22,7 +22,7 @@ export function SignInOptions({ headingLevel = 2 }: { headingLevel?: 1 | 2 }) {
         <h3 id="email-link-heading" className="text-lg">
           Sign in with an e-mail link
         </h3>
-        <EmailLinkForm />
+        <EmailLinkForm defaultEmail={email} />
       </section>
       <p className="border-t border-line pt-4 text-sm">
         A student with a class code and no account yet?{' '}
