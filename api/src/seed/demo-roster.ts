@@ -41,33 +41,44 @@ export const DEMO_STAFF: DemoPerson[] = [
   { email: 'esme.hartbridge@fernhollow.example', name: 'Esme Hartbridge', roles: ['admin'], label: 'School admin' },
 ];
 
-/** Invented student names, deliberately whimsical so they read as demo data. */
-const STUDENT_NAMES: [string, ...string[]][] = [
-  [
-    'Juno Fairweather',
-    'Kit Lanternby',
-    'Mira Coppervale',
-    'Olly Brackenridge',
-    'Pia Thistlewood',
-    'Rufus Emberly',
-    'Sable Winterbourne',
-    'Tomas Gallowglass',
-  ],
-  [
-    'Uma Kettleworth',
-    'Vance Harrowgate',
-    'Wren Ashcombe',
-    'Xavi Dunmere',
-    'Yara Pebblestone',
-    'Zed Marchbank',
-    'Ivo Rookwood',
-    'Lotte Quarrender',
-  ],
-];
-
+/** Three classes of invented students, named whimsically so they read as demo data. */
 export const DEMO_CLASSES = [
-  { name: '10F Physics', joinCode: 'TENFPHYS', teacher: 'ada.quillfeather@fernhollow.example', students: STUDENT_NAMES[0]! },
-  { name: '11K Physics', joinCode: 'ELVKPHYS', teacher: 'bram.ostrowe@fernhollow.example', students: STUDENT_NAMES[1]! },
+  {
+    name: '10F Physics',
+    joinCode: 'TENFPHYS',
+    teacher: 'ada.quillfeather@fernhollow.example',
+    students: [
+      'Juno Fairweather',
+      'Kit Lanternby',
+      'Mira Coppervale',
+      'Olly Brackenridge',
+      'Pia Thistlewood',
+      'Rufus Emberly',
+      'Sable Winterbourne',
+      'Tomas Gallowglass',
+    ],
+  },
+  {
+    name: '11K Physics',
+    joinCode: 'ELVKPHYS',
+    teacher: 'bram.ostrowe@fernhollow.example',
+    students: [
+      'Uma Kettleworth',
+      'Vance Harrowgate',
+      'Wren Ashcombe',
+      'Xavi Dunmere',
+      'Yara Pebblestone',
+      'Zed Marchbank',
+      'Ivo Rookwood',
+      'Lotte Quarrender',
+    ],
+  },
+  {
+    name: '12C Physics',
+    joinCode: 'TWLVCFRN',
+    teacher: 'cora.vantwell@fernhollow.example',
+    students: ['Nia Hollowmere', 'Osric Fenwright', 'Perpetua Vale', 'Quill Ashdown', 'Romilly Starke', 'Silas Brambleford'],
+  },
 ] as const;
 
 export function studentEmail(name: string): string {
@@ -77,7 +88,7 @@ export function studentEmail(name: string): string {
 /** The accounts the sign-in stand-in offers and `npm start` prints. */
 export const demoAccounts: DemoPerson[] = [
   ...DEMO_STAFF,
-  ...DEMO_CLASSES.map((cls): DemoPerson => ({
+  ...DEMO_CLASSES.slice(0, 2).map((cls): DemoPerson => ({
     email: studentEmail(cls.students[0]),
     name: cls.students[0],
     roles: ['student'] as Role[],

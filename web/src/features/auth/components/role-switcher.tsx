@@ -47,7 +47,7 @@ export function RoleSwitcher({ me }: { me: MeDto }) {
           value={current}
           disabled={mutation.isPending}
           onChange={(event) => change(event.target.value)}
-          className="min-h-9 w-auto min-w-0 max-w-full py-1 text-sm"
+          className="min-h-9 w-auto min-w-0 max-w-full truncate py-1 text-sm md:max-w-60"
         >
           {choices.map((choice) => (
             <option key={choice.value} value={choice.value}>
