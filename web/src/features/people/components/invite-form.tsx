@@ -1,48 +1,32 @@
-import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
-import { useForm } from 'react-hook-form';
-import type { z } from 'zod';
 import { InvitationCreateSchema } from '@core/contracts';
-import { Banner } from '@/components/ui/banner';
-import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
+import { FormFooter } from '@/components/ui/form-footer';
 import { MailIcon } from '@/components/ui/icons';
-import { Input, Select } from '@/components/ui/input';
-import { LiveRegion } from '@/components/ui/live-region';
-import { applyServerErrors } from '@/lib/form-errors';
+import { Input } from '@/components/ui/input';
+import { OptionField, type NamedOption } from '@/components/ui/option-field';
+import { emptyToNull } from '@/lib/empty-to-null';
+import { useContractForm } from '@/lib/use-contract-form';
 import { useCreateInvitation } from '../api/create-invitation';
 import { RoleCheckboxes } from './role-checkboxes';
 
-type FormInput = z.input<typeof InvitationCreateSchema>;
-type FormOutput = z.output<typeof InvitationCreateSchema>;
-type Option = { id: string; name: string };
-
 const FIELDS = ['email', 'name', 'roles', 'departmentId', 'classId'] as const;
-const emptyToNull = (value: unknown) => (value === '' ? null : value);
 
 /** Invite one person by e-mail with their roles, and optionally a department and a class. */
-export function InviteForm({ departments, classes }: { departments: Option[]; classes: Option[] }) {
+export function InviteForm({ departments, classes }: { departments: NamedOption[]; classes: NamedOption[] }) {
   const mutation = useCreateInvitation();
-  const [banner, setBanner] = useState<string | null>(null);
-  const form = useForm<FormInput, unknown, FormOutput>({
-    resolver: zodResolver(InvitationCreateSchema),
+  const { form, onSubmit, banner } = useContractForm({
+    schema: InvitationCreateSchema,
     defaultValues: { email: '', name: '', roles: [], departmentId: null, classId: null },
+    serverFields: FIELDS,
+    // already_member (409) has no details: it is about the e-mail address.
+    fallbackField: 'email',
+    submit: mutation.mutateAsync,
+    resetOnSuccess: true,
   });
   const { errors } = form.formState;
 
-  const onSubmit = form.handleSubmit(async (values) => {
-    setBanner(null);
-    try {
-      await mutation.mutateAsync(values);
-      form.reset();
-    } catch (error) {
-      // already_member (409) has no details: it is about the e-mail address.
-      setBanner(applyServerErrors(error, form.setError, FIELDS, 'email').bannerMessage);
-    }
-  });
-
   return (
-    <form onSubmit={(event) => void onSubmit(event)} noValidate className="flex max-w-2xl flex-col gap-5">
+    <form onSubmit={onSubmit} noValidate className="flex max-w-2xl flex-col gap-5">
       <Field label="E-mail address" hint="Their school address: the invitation and sign-in links go there." error={errors.email?.message}>
         {(control) => <Input {...control} {...form.register('email')} type="email" autoComplete="off" mono />}
       </Field>
@@ -51,49 +35,37 @@ export function InviteForm({ departments, classes }: { departments: Option[]; cl
       </Field>
       <RoleCheckboxes legend="Roles" error={errors.roles?.message} inputProps={() => form.register('roles')} />
       <div className="grid gap-5 sm:grid-cols-2">
-        <Field label="Department (optional)" error={errors.departmentId?.message}>
-          {(control) => (
-            <Select {...control} {...form.register('departmentId', { setValueAs: emptyToNull })}>
-              <option value="">No department</option>
-              {departments.map((item) => (
-                <option key={item.id} value={item.id}>
-                  {item.name}
-                </option>
-              ))}
-            </Select>
-          )}
-        </Field>
-        <Field label="Class (optional)" hint="Students are enrolled in it." error={errors.classId?.message}>
-          {(control) => (
-            <Select {...control} {...form.register('classId', { setValueAs: emptyToNull })}>
-              <option value="">No class</option>
-              {classes.map((item) => (
-                <option key={item.id} value={item.id}>
-                  {item.name}
-                </option>
-              ))}
-            </Select>
-          )}
-        </Field>
+        <OptionField
+          label="Department (optional)"
+          error={errors.departmentId?.message}
+          emptyLabel="No department"
+          options={departments}
+          {...form.register('departmentId', { setValueAs: emptyToNull })}
+        />
+        <OptionField
+          label="Class (optional)"
+          hint="Students are enrolled in it."
+          error={errors.classId?.message}
+          emptyLabel="No class"
+          options={classes}
+          {...form.register('classId', { setValueAs: emptyToNull })}
+        />
       </div>
-      <div>
-        <Button type="submit" busy={mutation.isPending}>
-          <MailIcon className="size-5" />
-          Send invitation
-        </Button>
-      </div>
-      <LiveRegion>
-        {mutation.isSuccess ? (
-          <Banner tone="success" title="Invitation sent">
-            {mutation.data.name} ({mutation.data.email}) is invited and appears under People as “Invited” until they first sign in.
-          </Banner>
-        ) : null}
-      </LiveRegion>
-      {banner ? (
-        <Banner tone="error" title="The invitation was not sent">
-          {banner}
-        </Banner>
-      ) : null}
+      <FormFooter
+        label="Send invitation"
+        icon={MailIcon}
+        busy={mutation.isPending}
+        success={
+          mutation.isSuccess
+            ? {
+                title: 'Invitation sent',
+                body: `${mutation.data.name} (${mutation.data.email}) is invited and appears under People as “Invited” until they first sign in.`,
+              }
+            : null
+        }
+        errorTitle="The invitation was not sent"
+        error={banner}
+      />
     </form>
   );
 }
