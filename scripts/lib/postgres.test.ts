@@ -27,6 +27,6 @@ describe('helpers', () => {
   });
 
   it('lists every folder on the way to the target', () => {
-    expect(ancestors('/root/work/pinfield/.data')).toEqual(['/root', '/root/work', '/root/work/pinfield', '/root/work/pinfield/.data']);
+    expect(ancestors('/srv/clones/pinfield/.data')).toEqual(['/srv', '/srv/clones', '/srv/clones/pinfield', '/srv/clones/pinfield/.data']);
   });
 });

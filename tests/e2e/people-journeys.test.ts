@@ -1,8 +1,15 @@
+import type { Page } from 'playwright-core';
 import { describe, expect, it } from 'vitest';
 import { baseUrl, openPage, screenshot } from './support/browser';
 import { inboxCount, nextLink, signInWithPicker } from './support/sign-in';
 
 const ADMIN = 'esme.hartbridge@fernhollow.example';
+
+/** Opens the admin's People page and searches it. */
+async function searchPeople(page: Page, text: string): Promise<void> {
+  await page.goto(`${baseUrl}/admin/people`);
+  await page.getByLabel('Search', { exact: true }).fill(text);
+}
 
 describe('an admin brings people in', () => {
   it('invites a teacher, who signs in from the e-mails and lands on the teacher home', async () => {
@@ -29,12 +36,7 @@ describe('an admin brings people in', () => {
     await person.waitForURL(`${baseUrl}/teacher`);
     await screenshot(person, 'invited-teacher-home-phone');
 
-    await page.goto(`${baseUrl}/admin/people`);
-    await page
-      .getByRole('searchbox')
-      .or(page.getByLabel(/Search/))
-      .first()
-      .fill('nell.invited');
+    await searchPeople(page, 'nell.invited');
     await page.getByRole('cell', { name: /^Nell Invited nell\.invited@fernhollow\.example/ }).waitFor();
   });
 
@@ -54,12 +56,7 @@ describe('an admin brings people in', () => {
     expect(await page.getByRole('button', { name: 'Import roster' }).isDisabled()).toBe(true);
     await screenshot(page, 'roster-preview-with-error');
 
-    await page.goto(`${baseUrl}/admin/people`);
-    await page
-      .getByRole('searchbox')
-      .or(page.getByLabel(/Search/))
-      .first()
-      .fill('otto.roster');
+    await searchPeople(page, 'otto.roster');
     await page.getByText('Nobody matches this search.').first().waitFor();
 
     await page.goto(`${baseUrl}/admin/roster`);
@@ -70,12 +67,7 @@ describe('an admin brings people in', () => {
     await page.getByText('Roster imported').waitFor();
     expect(await page.getByText('2 people invited, 1 enrolment made.').count()).toBe(1);
 
-    await page.goto(`${baseUrl}/admin/people`);
-    await page
-      .getByRole('searchbox')
-      .or(page.getByLabel(/Search/))
-      .first()
-      .fill('roster@fernhollow');
+    await searchPeople(page, 'roster@fernhollow');
     await page.getByRole('cell', { name: /^Otto Roster otto\.roster@fernhollow\.example/ }).waitFor();
     await page.getByRole('cell', { name: /^Bea Roster bea\.roster@fernhollow\.example/ }).waitFor();
   });
