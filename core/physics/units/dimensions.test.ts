@@ -4,6 +4,8 @@ import { PhysicsError } from './errors.ts';
 import { math } from './math.ts';
 
 describe('dimensions', () => {
+  // Derived units and their base-unit expressions: BIPM, The International System of Units (SI Brochure),
+  // 9th edition, 2019, Table 4 (tesla = Wb/m^2 = N/(A m), ohm, weber, hertz …); gauss: NIST SP 811, Table 10.
   it.each([
     ['T', 'magnetic-field'],
     ['mT', 'magnetic-field'],
