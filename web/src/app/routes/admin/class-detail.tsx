@@ -1,12 +1,12 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Link, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
 import type { ClassMemberDto } from '@core/contracts';
+import { BackLink } from '@/components/ui/back-link';
 import { Badge } from '@/components/ui/badge';
 import { Button } from '@/components/ui/button';
 import { Card } from '@/components/ui/card';
 import { ErrorBanner } from '@/components/ui/error-banner';
-import { ArrowLeftIcon } from '@/components/ui/icons';
 import { PageHeader } from '@/components/ui/page-header';
 import { Loading } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
@@ -54,10 +54,7 @@ export default function ClassDetailRoute() {
 
   return (
     <>
-      <Link to={paths.admin.classes} className="mb-4 inline-flex items-center gap-1 font-bold text-copper underline">
-        <ArrowLeftIcon className="size-4" />
-        All classes
-      </Link>
+      <BackLink to={paths.admin.classes}>All classes</BackLink>
       {detail.isPending ? <Loading label="Loading the class…" /> : null}
       {detail.isError ? <ErrorBanner error={detail.error} title="This class could not be loaded" /> : null}
       {detail.data ? (

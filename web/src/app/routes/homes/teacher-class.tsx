@@ -1,7 +1,7 @@
-import { Link, useParams } from 'react-router-dom';
+import { useParams } from 'react-router-dom';
+import { BackLink } from '@/components/ui/back-link';
 import { Badge } from '@/components/ui/badge';
 import { ErrorBanner } from '@/components/ui/error-banner';
-import { ArrowLeftIcon } from '@/components/ui/icons';
 import { PageHeader } from '@/components/ui/page-header';
 import { Loading } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
@@ -17,10 +17,7 @@ export default function TeacherClassRoute() {
   const clock = useSchoolClock();
   return (
     <>
-      <Link to={paths.teacher.home} className="mb-4 inline-flex items-center gap-1 font-bold text-copper underline">
-        <ArrowLeftIcon className="size-4" />
-        Your classes
-      </Link>
+      <BackLink to={paths.teacher.home}>Your classes</BackLink>
       {detail.isPending ? <Loading label="Loading the class…" /> : null}
       {detail.isError ? <ErrorBanner error={detail.error} title="This class could not be loaded" /> : null}
       {detail.data ? (
