@@ -10,4 +10,8 @@ export const LIMITS = {
   pageSizeMax: 100,
   joinCodeLength: 8,
   signInLinkMinutes: 15,
+  fileNameMax: 255,
+  recordingTitleMax: 200,
+  captionLabelMax: 60,
+  captionBytesMax: 512 * 1024,
 } as const;

@@ -7,6 +7,8 @@ import { pinoHttp } from 'pino-http';
 import { csrfSync } from 'csrf-sync';
 import type { Env } from './env';
 import type { Mailer } from './mail/mailer';
+import type { ObjectStorage } from './storage/object-storage';
+import type { JobQueue } from './jobs/job-queue';
 import { createSessionMiddleware } from './auth/session';
 import { createPassport } from './auth/google';
 import { loadActor } from './middleware/load-actor';
@@ -31,6 +33,8 @@ export interface AppDeps {
   pool: pg.Pool;
   mailer: Mailer;
   logger: Logger;
+  storage: ObjectStorage;
+  jobs: JobQueue;
   demoAccounts: { email: string; name: string; label: string }[];
 }
 
@@ -40,7 +44,7 @@ function trustProxy(value: string): boolean | number | string {
 }
 
 /** The one composition root: builds services from their dependencies and mounts every route. */
-export function createApp({ env, db, pool, mailer, logger, demoAccounts }: AppDeps): express.Express {
+export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAccounts }: AppDeps): express.Express {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', trustProxy(env.TRUST_PROXY));
@@ -101,6 +105,7 @@ export function createApp({ env, db, pool, mailer, logger, demoAccounts }: AppDe
   api.use(classesRoutes(classes));
   api.use(departmentsRoutes(departments));
   api.use(schoolsRoutes(db));
+  // recordings: uploads and library routes are mounted here (storage, jobs)
   api.use(apiNotFound);
 
   app.use('/api', api);

@@ -9,6 +9,8 @@ const url = z.url({ error: 'expected a URL such as http://127.0.0.1:4313/authori
 /** Loopback hosts: in production these can only be the local fakes, never real services. */
 const LOOPBACK = /^(localhost|127\.\d+\.\d+\.\d+|\[::1\])$/;
 
+const GIB = 1024 ** 3;
+
 const DEV_SECRET = 'pinfield-local-development-secret-not-for-production';
 
 /** Every setting of the app; defaults serve the local demo, production must set the ones in `productionRequired`. */
@@ -49,6 +51,18 @@ export const envSchema = z.object({
     .string()
     .regex(/^\d+(b|kb|mb)$/i, { error: 'expected a size such as 1mb or 200kb' })
     .default('1mb'),
+  UPLOAD_MAX_BYTES: z.coerce
+    .number({ error: 'expected a number of bytes' })
+    .int()
+    .min(2 * GIB, { error: 'expected at least 2147483648 (2 GiB): phone recordings are often that large' })
+    .max(5 * 1024 * GIB, { error: 'expected at most 5 TiB (the S3 object limit)' })
+    .default(2 * GIB),
+  UPLOAD_QUOTA_BYTES: z.coerce.number({ error: 'expected a number of bytes' }).int().min(2 * GIB).default(20 * GIB),
+  UPLOAD_ABANDON_HOURS: z.coerce.number({ error: 'expected a number of hours' }).int().min(1).default(48),
+  PLAYBACK_URL_MINUTES: z.coerce.number({ error: 'expected a number of minutes' }).int().min(5).max(7 * 24 * 60).default(120),
+  WORKER: z.enum(['in-process', 'off'], { error: 'expected in-process or off' }).default('in-process'),
+  PROCESSING_TIMEOUT_MINUTES: z.coerce.number({ error: 'expected a number of minutes' }).int().min(1).default(60),
+  FFMPEG_NICE: z.coerce.number({ error: 'expected a niceness from 0 to 19' }).int().min(0).max(19).default(10),
 });
 
 export type Env = z.infer<typeof envSchema>;

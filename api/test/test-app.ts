@@ -7,12 +7,18 @@ import { loadEnv } from '../src/env';
 import { createLogger } from '../src/logger';
 import type { Mailer, MailMessage } from '../src/mail/mailer';
 import { createTestDatabase, type TestDatabase } from './test-db';
+import { createObjectStorage, storageConfigFromEnv, type ObjectStorage } from '../src/storage/object-storage';
+import type { JobQueue } from '../src/jobs/job-queue';
 
 export interface TestApp {
   app: Express;
   db: Knex;
   /** Every e-mail the app sent, in order. */
   sent: MailMessage[];
+  /** The test profile's S3 fake (started by `npm test`). */
+  storage: ObjectStorage;
+  /** Recording ids queued for processing, in order (no worker runs in API tests). */
+  enqueued: string[];
   close(): Promise<void>;
 }
 
@@ -29,17 +35,30 @@ export async function createTestApp(env: Record<string, string> = {}): Promise<T
   const pool = new pg.Pool({ connectionString: database.url, max: 3 });
   const config = loadEnv({
     NODE_ENV: 'test',
+    // The S3 fake of the test profile: npm test passes its address to this phase.
+    S3_ENDPOINT: process.env.S3_ENDPOINT,
+    S3_BUCKET: process.env.S3_BUCKET,
     DATABASE_URL: database.url,
     LOG_LEVEL: 'silent',
     SIGNIN_LIMIT_PER_EMAIL: '1000',
     WEB_DIST: '/nonexistent',
     ...env,
   });
-  const app = createApp({ env: config, db: database.knex, pool, mailer, logger: createLogger('silent'), demoAccounts: [] });
+  const storage = createObjectStorage(storageConfigFromEnv(config));
+  const enqueued: string[] = [];
+  const jobs: JobQueue = {
+    async enqueueProcessing(recordingId) {
+      if (!enqueued.includes(recordingId)) enqueued.push(recordingId);
+    },
+    async stop() {},
+  };
+  const app = createApp({ env: config, db: database.knex, pool, mailer, logger: createLogger('silent'), storage, jobs, demoAccounts: [] });
   return {
     app,
     db: database.knex,
     sent,
+    storage,
+    enqueued,
     async close() {
       await pool.end();
       await database.drop();

@@ -4,3 +4,4 @@ export * from './classes';
 export * from './departments';
 export * from './people';
 export * from './school';
+export * from './recordings';

@@ -1,0 +1,3 @@
+export * from './part-size';
+export * from './format';
+export * from './object-keys';
