@@ -127,6 +127,9 @@ describe('S3 fake', () => {
       'is not an origin',
     );
     await expect(startS3Fake({ ...base, buckets: [{ name: BUCKET, corsOrigins: [] }] })).rejects.toThrow('needs at least one CORS origin');
+    await expect(startS3Fake({ ...base, buckets: [{ name: BUCKET, corsOrigins: [APP_ORIGIN] }], listPageLimit: 0 })).rejects.toThrow(
+      'S3 fake listPageLimit must be a whole number from 1 to 1000, not 0.',
+    );
   });
 
   it('reports a port that is already taken', async () => {

@@ -1,6 +1,7 @@
 import { mkdir } from 'node:fs/promises';
 import { createServer } from 'node:http';
 import S3rver from 's3rver';
+import { createS3Handler } from './s3-front';
 import type { RunningFake } from './server-lifecycle';
 import { closeHttpServer, httpUrl, listenOn } from './server-lifecycle';
 
@@ -18,7 +19,14 @@ export interface S3FakeOptions {
   /** Where objects live on disk; created if missing and kept across restarts. */
   directory: string;
   buckets: S3FakeBucket[];
+  /**
+   * Most parts (ListParts) or uploads (ListMultipartUploads) in one answer. S3 answers at most 1,000,
+   * the default; tests set fewer to make clients follow the pages without uploading 1,001 parts.
+   */
+  listPageLimit?: number;
 }
+
+const CLIENT_GONE = new Set(['ECONNRESET', 'EPIPE', 'ECONNABORTED', 'ERR_STREAM_PREMATURE_CLOSE']);
 
 const BUCKET_NAME = /^[a-z0-9][a-z0-9.-]{1,61}[a-z0-9]$/;
 
@@ -71,10 +79,18 @@ export function corsXml(origins: string[]): string {
   );
 }
 
-/** Starts s3rver on loopback with the given buckets (and their CORS rules) provisioned. */
+/**
+ * Starts s3rver on loopback with the given buckets (and their CORS rules) provisioned, behind a front
+ * (s3-front.ts) that adds what production S3 does and s3rver 3.7.1 lacks for resumable browser uploads:
+ * ListParts, AbortMultipartUpload, ListMultipartUploads, NoSuchUpload, SigV4 signature checks, nosniff.
+ */
 export async function startS3Fake(options: S3FakeOptions): Promise<RunningFake> {
   const host = options.host ?? '127.0.0.1';
   validateBuckets(options.buckets);
+  const pageLimit = options.listPageLimit ?? 1000;
+  if (!Number.isInteger(pageLimit) || pageLimit < 1 || pageLimit > 1000) {
+    throw new Error(`S3 fake listPageLimit must be a whole number from 1 to 1000, not ${options.listPageLimit}.`);
+  }
   await mkdir(options.directory, { recursive: true });
 
   const s3 = new S3rver({
@@ -86,13 +102,15 @@ export async function startS3Fake(options: S3FakeOptions): Promise<RunningFake> 
     vhostBuckets: false,
     configureBuckets: options.buckets.map((bucket) => ({ name: bucket.name, configs: [corsXml(bucket.corsOrigins)] })),
   });
-  s3.on('error', (error: Error & { status?: number }) => {
+  s3.on('error', (error: Error & { status?: number; code?: string }) => {
+    // A client that hangs up mid-request (a browser tab closed during a part) is not the fake's fault.
+    if (CLIENT_GONE.has(error.code ?? '') || error.code?.startsWith('HPE_')) return;
     if (error.status === undefined || error.status >= 500) console.error('[s3 fake] request failed:', error);
   });
   await s3.configureBuckets();
 
   // Our own server instead of s3rver.run(): run() never settles when the port is taken.
-  const server = createServer(s3.callback());
+  const server = createServer(createS3Handler(s3, { pageLimit }));
   const port = await listenOn(server, options.port, host, 'S3 fake');
   return { url: httpUrl(host, port), close: () => closeHttpServer(server) };
 }

@@ -28,7 +28,8 @@ async function main(): Promise<void> {
   const databaseUrl = process.env.DATABASE_URL || appDatabaseUrl(port, 'pinfield');
   const target = targetsLocalCluster(databaseUrl, port);
   if (target.local) {
-    ensurePackages(['postgresql']);
+    // Seed steps make their demo media with ffmpeg.
+    ensurePackages(command === 'seed' ? ['postgresql', 'ffmpeg'] : ['postgresql']);
     const { dataDir, pgDir, runDir } = dataPaths('local');
     mkdirSync(dataDir, { recursive: true });
     await prepareCluster(supervisor, { dir: pgDir, port, throwaway: false, databases: [target.database], runDir });

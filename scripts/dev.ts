@@ -39,7 +39,7 @@ async function main(): Promise<void> {
   }
   const accounts = await loadDemoAccounts();
   await startFakes(supervisor, { ports, dataDir, app, accounts, runDir, corsOrigins: [viteUrl, `http://${HOST}:${app.PORT}`] });
-  await migrateAndSeed(app.DATABASE_URL ?? '');
+  await migrateAndSeed(app);
 
   const api = supervisor.own(
     startChild({

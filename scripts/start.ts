@@ -52,7 +52,7 @@ async function main(): Promise<void> {
   }
   const accounts = await loadDemoAccounts();
   const fakes = await clock.time('fakes', () => startFakes(supervisor, { ports, dataDir, app, accounts, runDir }));
-  await clock.time('migrate + seed', () => migrateAndSeed(app.DATABASE_URL ?? ''));
+  await clock.time('migrate + seed', () => migrateAndSeed(app));
   await clock.time('web build', () => buildWeb(supervisor));
   const appChild = await clock.time('app', () => startApp(supervisor, { app, runDir }));
 

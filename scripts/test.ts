@@ -88,7 +88,7 @@ async function e2ePhase(cluster: Cluster, app: Env): Promise<void> {
   const started = performance.now();
   try {
     await recreateDatabase(cluster, 'pinfield_e2e');
-    await migrateAndSeed(app.DATABASE_URL ?? '');
+    await migrateAndSeed(app);
     await buildWeb(supervisor);
     const appChild = await startApp(supervisor, { app, runDir, name: 'e2e app' });
     results.push({ name: 'e2e set-up', ms: performance.now() - started, passed: 0, failed: 0, setup: true });

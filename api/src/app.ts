@@ -25,6 +25,10 @@ import { departmentsRoutes } from './features/departments/departments.routes';
 import { createPeopleService } from './features/people/people.service';
 import { peopleRoutes } from './features/people/people.routes';
 import { schoolsRoutes } from './features/schools/schools.routes';
+import { createUploadsService } from './features/uploads/uploads.service';
+import { uploadsRoutes } from './features/uploads/uploads.routes';
+import { createRecordingsServices } from './features/recordings/recordings.service';
+import { recordingsRoutes } from './features/recordings/recordings.routes';
 import { webApp } from './web-app';
 
 export interface AppDeps {
@@ -59,14 +63,17 @@ export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAc
   const authConfig = { demoMode: env.DEMO_MODE, demoAccounts: env.DEMO_MODE ? demoAccounts : [] };
 
   const https = env.PUBLIC_URL.startsWith('https://');
+  const storageOrigin = new URL(env.S3_ENDPOINT).origin;
   app.use(
     helmet({
       contentSecurityPolicy: {
         directives: {
-          'img-src': ["'self'", 'data:', 'blob:'],
+          // Posters, part uploads and playback go straight between the browser and storage.
+          'img-src': ["'self'", 'data:', 'blob:', storageOrigin],
+          'connect-src': ["'self'", storageOrigin],
           'font-src': ["'self'", 'data:'],
           'style-src': ["'self'", "'unsafe-inline'"],
-          'media-src': ["'self'", 'blob:', new URL(env.S3_ENDPOINT).origin],
+          'media-src': ["'self'", 'blob:', storageOrigin],
           // Upgrading would break a plain-http local or classroom-network install.
           'upgrade-insecure-requests': https ? [] : null,
         },
@@ -105,7 +112,9 @@ export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAc
   api.use(classesRoutes(classes));
   api.use(departmentsRoutes(departments));
   api.use(schoolsRoutes(db));
+  api.use(uploadsRoutes(createUploadsService({ db, storage, jobs, env })));
   // recordings: uploads and library routes are mounted here (storage, jobs)
+  api.use(recordingsRoutes(createRecordingsServices({ db, storage, jobs, playbackMinutes: env.PLAYBACK_URL_MINUTES })));
   api.use(apiNotFound);
 
   app.use('/api', api);

@@ -61,7 +61,13 @@ export const envSchema = z.object({
   UPLOAD_ABANDON_HOURS: z.coerce.number({ error: 'expected a number of hours' }).int().min(1).default(48),
   PLAYBACK_URL_MINUTES: z.coerce.number({ error: 'expected a number of minutes' }).int().min(5).max(7 * 24 * 60).default(120),
   WORKER: z.enum(['in-process', 'off'], { error: 'expected in-process or off' }).default('in-process'),
-  PROCESSING_TIMEOUT_MINUTES: z.coerce.number({ error: 'expected a number of minutes' }).int().min(1).default(60),
+  PROCESSING_TIMEOUT_MINUTES: z.coerce
+    .number({ error: 'expected a number of minutes' })
+    .int()
+    .min(1)
+    // pg-boss refuses job time limits of a day or more.
+    .max(1439, { error: 'expected at most 1439 minutes (just under a day)' })
+    .default(60),
   FFMPEG_NICE: z.coerce.number({ error: 'expected a niceness from 0 to 19' }).int().min(0).max(19).default(10),
 });
 

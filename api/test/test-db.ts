@@ -1,7 +1,7 @@
 import pg from 'pg';
 import { randomBytes } from 'node:crypto';
 import { createKnex } from '../src/db/knex';
-import { TEMPLATE_DB, databaseUrl } from './global-setup';
+import { COPY_PREFIX, TEMPLATE_DB, databaseUrl } from './global-setup';
 import type { Knex } from 'knex';
 
 export interface TestDatabase {
@@ -22,7 +22,7 @@ async function admin<T>(work: (client: pg.Client) => Promise<T>): Promise<T> {
 
 /** A fresh database copied from the migrated template, so test files never share rows. */
 export async function createTestDatabase(): Promise<TestDatabase> {
-  const name = `pinfield_t_${randomBytes(6).toString('hex')}`;
+  const name = `${COPY_PREFIX}${randomBytes(6).toString('hex')}`;
   await admin((client) => client.query(`CREATE DATABASE ${name} TEMPLATE ${TEMPLATE_DB}`));
   const url = databaseUrl(name);
   const knex = createKnex(url, { min: 0, max: 5 });
@@ -38,7 +38,7 @@ export async function createTestDatabase(): Promise<TestDatabase> {
 
 /** An empty database with nothing migrated, for migration tests. */
 export async function createEmptyDatabase(): Promise<{ url: string; drop(): Promise<void> }> {
-  const name = `pinfield_t_${randomBytes(6).toString('hex')}`;
+  const name = `${COPY_PREFIX}${randomBytes(6).toString('hex')}`;
   await admin((client) => client.query(`CREATE DATABASE ${name}`));
   return {
     url: databaseUrl(name),

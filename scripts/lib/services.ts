@@ -91,12 +91,13 @@ export async function runToCompletion(
   if (info.code !== 0) throw new Error(`${label} failed (${describeExit(info)})`);
 }
 
-/** Applies the Knex migrations and the seed steps (each runs once; see api/src/seed). */
-export async function migrateAndSeed(databaseUrl: string): Promise<void> {
+/** Applies the Knex migrations and the seed steps (each runs once; see api/src/seed) with the app's settings. */
+export async function migrateAndSeed(app: Env): Promise<void> {
+  const databaseUrl = app.DATABASE_URL ?? '';
   const { migrate } = await import('../../api/src/db/migrator');
   const { seed } = await import('../../api/src/seed/seeder');
   const migrated = await migrate(databaseUrl, 'latest');
   log(migrated.length > 0 ? `migrations applied: ${migrated.join(', ')}` : 'migrations: already up to date');
-  const seeded = await seed(databaseUrl);
+  const seeded = await seed(databaseUrl, undefined, app);
   log(seeded.length > 0 ? `seed steps run: ${seeded.join(', ')}` : 'seed steps: all already run');
 }

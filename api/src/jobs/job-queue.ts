@@ -4,6 +4,8 @@ import type { Knex } from 'knex';
 export const QUEUES = {
   processRecording: 'process-recording',
   cleanUploads: 'clean-abandoned-uploads',
+  /** Dead letters of process-recording: a job that used its last attempt lands here, and the recording is marked failed. */
+  processingFailed: 'process-recording-failed',
 } as const;
 
 export interface ProcessRecordingJob {

@@ -31,6 +31,8 @@ export const routes: RouteObject[] = [
           roleSection('teacher', 'teacher', [
             { index: true, lazy: page(() => import('./routes/homes/teacher-home')) },
             { path: 'classes/:classId', lazy: page(() => import('./routes/homes/teacher-class')) },
+            { path: 'recordings', lazy: page(() => import('./routes/recordings/recordings')) },
+            { path: 'recordings/:recordingId', lazy: page(() => import('./routes/recordings/recording-detail')) },
           ]),
           roleSection('student', 'student', [{ index: true, lazy: page(() => import('./routes/homes/student-home')) }]),
           roleSection('coordinator', 'coordinator', [{ index: true, lazy: page(() => import('./routes/homes/coordinator-home')) }]),

@@ -6,7 +6,12 @@ export const paths = {
   signIn: '/signin',
   signInLink: '/signin/link',
   join: '/join',
-  teacher: { home: '/teacher', class: (classId: string) => `/teacher/classes/${classId}` },
+  teacher: {
+    home: '/teacher',
+    class: (classId: string) => `/teacher/classes/${classId}`,
+    recordings: '/teacher/recordings',
+    recording: (recordingId: string) => `/teacher/recordings/${recordingId}`,
+  },
   student: { home: '/student' },
   coordinator: { home: '/coordinator' },
   substitute: { home: '/substitute' },

@@ -1,3 +1,4 @@
+import { Link } from 'react-router-dom';
 import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorBanner } from '@/components/ui/error-banner';
 import { FieldLinesIcon } from '@/components/ui/icons';
@@ -23,13 +24,25 @@ export default function TeacherHomeRoute() {
         {classes.isError ? <ErrorBanner error={classes.error} title="Your classes could not be loaded" /> : null}
         {classes.data ? <TeacherClassList classes={classes.data.classes} classHref={paths.teacher.class} /> : null}
       </section>
+      <section aria-labelledby="recordings-heading" className="mt-10 flex flex-col gap-4">
+        <h2 id="recordings-heading" className="text-2xl">
+          Your recordings
+        </h2>
+        <p>
+          Upload videos of your demonstrations, follow their processing and add captions on the{' '}
+          <Link to={paths.teacher.recordings} className="font-bold text-copper underline">
+            Recordings page
+          </Link>
+          .
+        </p>
+      </section>
       <section aria-labelledby="lessons-heading" className="mt-10 flex flex-col gap-4">
         <h2 id="lessons-heading" className="text-2xl">
           Your lessons
         </h2>
         <EmptyState icon={<FieldLinesIcon className="size-8" />} title="No lessons yet">
-          Recordings of your demonstrations, and the lessons you build from them by pinning checkpoints on the timeline, will appear here,
-          ready to assign to the classes above. Uploading recordings and the lesson builder are not part of this version of Pinfield yet.
+          The lessons you build from your recordings by pinning checkpoints on the timeline will appear here, ready to assign to the classes
+          above. The lesson builder is not part of this version of Pinfield yet.
         </EmptyState>
       </section>
     </>
