@@ -52,7 +52,8 @@ export function createS3Handler(s3: S3rver, options: { pageLimit: number }): Req
       passOn(req, res);
     } catch (error) {
       if (!(error instanceof S3Error)) console.error('[s3 fake] request failed:', error);
-      const refusal = error instanceof S3Error ? error : new S3Error('InternalError', 'We encountered an internal error. Please try again.');
+      const refusal =
+        error instanceof S3Error ? error : new S3Error('InternalError', 'We encountered an internal error. Please try again.');
       // With CORS headers, a browser can read the refusal (say, an expired part URL) instead of a network error.
       if (target) await applyCors(s3.store, target, req, res);
       await sendError(res, req, refusal, method);

@@ -47,7 +47,10 @@ export function parseTarget(req: IncomingMessage): S3Target {
 export async function drain(req: IncomingMessage): Promise<void> {
   if (req.readableEnded || req.destroyed) return;
   await new Promise<void>((resolve) => {
-    req.on('end', resolve).on('error', () => resolve()).on('close', resolve);
+    req
+      .on('end', resolve)
+      .on('error', () => resolve())
+      .on('close', resolve);
     req.resume();
   });
 }

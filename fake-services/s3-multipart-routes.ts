@@ -57,7 +57,14 @@ async function listParts(request: MultipartRequest, bucket: string, key: string)
   const upload = await requireUpload(request, bucket, key);
   const after = (await uploads.parts(upload)).filter((part) => part.partNumber > marker);
   const parts = after.slice(0, maxParts);
-  const xml = listPartsXml({ upload, marker, maxParts, parts, truncated: after.length > parts.length, encodingType: target.query.get('encoding-type') });
+  const xml = listPartsXml({
+    upload,
+    marker,
+    maxParts,
+    parts,
+    truncated: after.length > parts.length,
+    encodingType: target.query.get('encoding-type'),
+  });
   sendXml(res, 200, xml, target.method);
 }
 

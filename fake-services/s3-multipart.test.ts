@@ -65,7 +65,11 @@ describe('S3 fake: resumable multipart upload, through the API storage module', 
     expect(raw.Parts?.every((part) => part.LastModified instanceof Date && !Number.isNaN(part.LastModified.getTime()))).toBe(true);
     expect(raw.IsTruncated).toBe(false);
 
-    await rig.storage.completeMultipart(key, uploadId, etags.map((etag, index) => ({ partNumber: index + 1, etag })));
+    await rig.storage.completeMultipart(
+      key,
+      uploadId,
+      etags.map((etag, index) => ({ partNumber: index + 1, etag })),
+    );
     expect(await rig.storage.head(key)).toEqual({ size: 2 * PART + LAST, contentType: 'video/mp4' });
 
     // Across the boundary of parts 1 and 2: bytes in the order they were sent.
@@ -99,11 +103,23 @@ describe('S3 fake: resumable multipart upload, through the API storage module', 
     expect(first.IsTruncated).toBe(true);
     expect(first.NextPartNumberMarker).toBe('2');
     const second = await rig.client.send(
-      new ListPartsCommand({ Bucket: TEST_BUCKET, Key: key, UploadId: uploadId, MaxParts: 2, PartNumberMarker: first.NextPartNumberMarker }),
+      new ListPartsCommand({
+        Bucket: TEST_BUCKET,
+        Key: key,
+        UploadId: uploadId,
+        MaxParts: 2,
+        PartNumberMarker: first.NextPartNumberMarker,
+      }),
     );
     expect(second.Parts?.map((part) => part.PartNumber)).toEqual([3, 4]);
     const last = await rig.client.send(
-      new ListPartsCommand({ Bucket: TEST_BUCKET, Key: key, UploadId: uploadId, MaxParts: 2, PartNumberMarker: second.NextPartNumberMarker }),
+      new ListPartsCommand({
+        Bucket: TEST_BUCKET,
+        Key: key,
+        UploadId: uploadId,
+        MaxParts: 2,
+        PartNumberMarker: second.NextPartNumberMarker,
+      }),
     );
     expect(last.Parts?.map((part) => part.PartNumber)).toEqual([5]);
     expect(last.IsTruncated).toBe(false);
@@ -149,7 +165,9 @@ describe('S3 fake: resumable multipart upload, through the API storage module', 
       name: 'NoSuchUpload',
       status: 404,
     });
-    expect(await s3ErrorOf(rig.client.send(new AbortMultipartUploadCommand({ Bucket: TEST_BUCKET, Key: key, UploadId: uploadId })))).toEqual({
+    expect(
+      await s3ErrorOf(rig.client.send(new AbortMultipartUploadCommand({ Bucket: TEST_BUCKET, Key: key, UploadId: uploadId }))),
+    ).toEqual({
       name: 'NoSuchUpload',
       status: 404,
     });
@@ -230,13 +248,27 @@ describe('S3 fake: resumable multipart upload, through the API storage module', 
           MultipartUpload: { Parts: parts.map((part) => ({ PartNumber: part.partNumber, ETag: part.etag })) },
         }),
       );
-    expect(await s3ErrorOf(complete([{ partNumber: 1, etag: small[0]! }, { partNumber: 2, etag: small[1]! }]))).toEqual({
+    expect(
+      await s3ErrorOf(
+        complete([
+          { partNumber: 1, etag: small[0]! },
+          { partNumber: 2, etag: small[1]! },
+        ]),
+      ),
+    ).toEqual({
       name: 'EntityTooSmall',
       status: 400,
     });
     expect(await s3ErrorOf(complete([{ partNumber: 1, etag: small[1]! }]))).toEqual({ name: 'InvalidPart', status: 400 });
     expect(await s3ErrorOf(complete([{ partNumber: 3, etag: small[0]! }]))).toEqual({ name: 'InvalidPart', status: 400 });
-    expect(await s3ErrorOf(complete([{ partNumber: 2, etag: small[1]! }, { partNumber: 1, etag: small[0]! }]))).toEqual({
+    expect(
+      await s3ErrorOf(
+        complete([
+          { partNumber: 2, etag: small[1]! },
+          { partNumber: 1, etag: small[0]! },
+        ]),
+      ),
+    ).toEqual({
       name: 'InvalidPartOrder',
       status: 400,
     });

@@ -5,7 +5,17 @@ import { afterAll, afterEach, beforeAll, describe, expect, it, vi } from 'vitest
 // Real files and sockets on a shared 2-core machine: a generous ceiling, no timing is asserted.
 vi.setConfig({ testTimeout: 30_000, hookTimeout: 30_000 });
 import type { S3TestRig } from './s3-test-fixture';
-import { TEST_BUCKET, TEST_ORIGIN, clientSettings, errorCode, md5Hex, partBytes, putPart, startS3Rig, storageWithCredentials } from './s3-test-fixture';
+import {
+  TEST_BUCKET,
+  TEST_ORIGIN,
+  clientSettings,
+  errorCode,
+  md5Hex,
+  partBytes,
+  putPart,
+  startS3Rig,
+  storageWithCredentials,
+} from './s3-test-fixture';
 
 let rig: S3TestRig;
 
@@ -33,7 +43,9 @@ describe('S3 fake: presigned URLs expire', () => {
     const partUrl = await rig.storage.signPart(key, uploadId, 1, 10, 1);
     const getUrl = await rig.storage.signGet('expiry/poster.jpg', { expiresInSeconds: 1 });
     // ListParts is answered by the fake's own front, not s3rver: its expiry check is the front's.
-    const listUrl = await getSignedUrl(rig.client, new ListPartsCommand({ Bucket: TEST_BUCKET, Key: key, UploadId: uploadId }), { expiresIn: 1 });
+    const listUrl = await getSignedUrl(rig.client, new ListPartsCommand({ Bucket: TEST_BUCKET, Key: key, UploadId: uploadId }), {
+      expiresIn: 1,
+    });
 
     vi.setSystemTime(signedAt + 500);
     expect((await putPart(partUrl, Buffer.alloc(10, 1))).status).toBe(200);
@@ -105,7 +117,10 @@ describe('S3 fake: the multipart routes check signatures like the others', () =>
       );
 
     expect(await refusal(wrongSecret.listParts(key, uploadId))).toEqual(['SignatureDoesNotMatch', 403]);
-    expect(await refusal(wrongSecret.client.send(new ListMultipartUploadsCommand({ Bucket: TEST_BUCKET })))).toEqual(['SignatureDoesNotMatch', 403]);
+    expect(await refusal(wrongSecret.client.send(new ListMultipartUploadsCommand({ Bucket: TEST_BUCKET })))).toEqual([
+      'SignatureDoesNotMatch',
+      403,
+    ]);
     expect(await refusal(stranger.listParts(key, uploadId))).toEqual(['InvalidAccessKeyId', 403]);
     // abortMultipart swallows only NoSuchUpload: a refused abort surfaces.
     expect(await refusal(wrongSecret.abortMultipart(key, uploadId))).toEqual(['SignatureDoesNotMatch', 403]);

@@ -122,7 +122,8 @@ function parseCredential(value: string, amzDate: string, malformed: (message: st
     throw malformed(`The credential "${value}" is malformed: expected <access key>/<yyyymmdd>/<region>/s3/aws4_request.`);
   }
   const [accessKeyId, day, region, service, terminator] = parts as [string, string, string, string, string];
-  if (day !== amzDate.slice(0, 8)) throw malformed(`The credential date "${day}" does not match the request date "${amzDate.slice(0, 8)}".`);
+  if (day !== amzDate.slice(0, 8))
+    throw malformed(`The credential date "${day}" does not match the request date "${amzDate.slice(0, 8)}".`);
   if (service !== 's3') throw malformed(`The credential names the service "${service}"; this is s3.`);
   if (terminator !== 'aws4_request') throw malformed(`The credential must end in aws4_request, not "${terminator}".`);
   return { accessKeyId, scope: [day, region, service, terminator] };
@@ -185,7 +186,15 @@ function checkHeaderAuth(request: SignableRequest, secrets: ReadonlyMap<string, 
   }
   const { accessKeyId, scope } = parseCredential(credential, amzDate, malformed);
   const secret = secretFor(accessKeyId, secrets);
-  const input = { request, pairs: parseQuery(request.rawQuery), signedHeaders: signedHeaderList(signedHeaders, malformed), payloadHash, amzDate, scope, secret };
+  const input = {
+    request,
+    pairs: parseQuery(request.rawQuery),
+    signedHeaders: signedHeaderList(signedHeaders, malformed),
+    payloadHash,
+    amzDate,
+    scope,
+    secret,
+  };
   compare(input, signature, accessKeyId);
 }
 
@@ -206,11 +215,13 @@ function checkQueryAuth(request: SignableRequest, pairs: [string, string][], sec
     );
   }
   const date = parseAmzDate(amzDate);
-  if (!date) throw malformed('X-Amz-Date must be in the ISO8601 Long Format "yyyyMMdd\'T\'HHmmss\'Z\'"');
+  if (!date) throw malformed("X-Amz-Date must be in the ISO8601 Long Format \"yyyyMMdd'T'HHmmss'Z'\"");
   const expires = /^\d+$/.test(expiresText) ? Number(expiresText) : NaN;
   if (!Number.isInteger(expires)) throw malformed('X-Amz-Expires should be a number');
   if (expires > MAX_PRESIGNED_SECONDS) {
-    throw malformed('X-Amz-Expires must be less than a week (in seconds); that is, the given X-Amz-Expires must be less than 604800 seconds');
+    throw malformed(
+      'X-Amz-Expires must be less than a week (in seconds); that is, the given X-Amz-Expires must be less than 604800 seconds',
+    );
   }
   const expiresAt = new Date(date.getTime() + expires * 1000);
   if (now > expiresAt) {
@@ -223,7 +234,15 @@ function checkQueryAuth(request: SignableRequest, pairs: [string, string][], sec
   const { accessKeyId, scope } = parseCredential(credential, amzDate, malformed);
   const secret = secretFor(accessKeyId, secrets);
   // A presigned URL never signs its body: S3 takes the literal UNSIGNED-PAYLOAD as the payload hash.
-  const input = { request, pairs, signedHeaders: signedHeaderList(signedHeaders, malformed), payloadHash: 'UNSIGNED-PAYLOAD', amzDate, scope, secret };
+  const input = {
+    request,
+    pairs,
+    signedHeaders: signedHeaderList(signedHeaders, malformed),
+    payloadHash: 'UNSIGNED-PAYLOAD',
+    amzDate,
+    scope,
+    secret,
+  };
   compare(input, signature, accessKeyId);
 }
 

@@ -121,7 +121,12 @@ export function createUploadsStore(store: S3rverFilesystemStore) {
     const found = await Promise.all(names.map((name) => find(bucket, name)));
     return found
       .filter((upload): upload is StoredUpload => upload !== null)
-      .sort((a, b) => Buffer.compare(Buffer.from(a.key), Buffer.from(b.key)) || a.initiated.getTime() - b.initiated.getTime() || (a.uploadId < b.uploadId ? -1 : 1));
+      .sort(
+        (a, b) =>
+          Buffer.compare(Buffer.from(a.key), Buffer.from(b.key)) ||
+          a.initiated.getTime() - b.initiated.getTime() ||
+          (a.uploadId < b.uploadId ? -1 : 1),
+      );
   }
 
   /** The upload's finished parts by number; a part still being written is not listed. */
@@ -160,7 +165,12 @@ export function createUploadsStore(store: S3rverFilesystemStore) {
    * Stores one part: written under a temporary name, then renamed, so an interrupted upload never
    * leaves a short part that ListParts would report as stored. Replaces s3rver's putPart.
    */
-  async function writePart(bucket: string, uploadId: string, partNumber: string, content: Readable): Promise<{ size: number; md5: string }> {
+  async function writePart(
+    bucket: string,
+    uploadId: string,
+    partNumber: string,
+    content: Readable,
+  ): Promise<{ size: number; md5: string }> {
     const dir = uploadDir(bucket, uploadId);
     if (!isPartNumber(partNumber)) throw invalidPartNumber(partNumber);
     if (!UPLOAD_ID.test(uploadId)) throw noSuchUpload(uploadId);
@@ -230,7 +240,11 @@ export function createUploadsStore(store: S3rverFilesystemStore) {
    * 5 MiB minimum but for the last), then forgets the upload. Replaces s3rver's putObjectMultipart,
    * which neither checks the parts nor survives a part file vanishing mid-read.
    */
-  async function complete(bucket: string, uploadId: string, wanted: { number: number; etag: string }[]): Promise<{ size: number; md5: string }> {
+  async function complete(
+    bucket: string,
+    uploadId: string,
+    wanted: { number: number; etag: string }[],
+  ): Promise<{ size: number; md5: string }> {
     const upload = await find(bucket, uploadId);
     if (!upload) throw noSuchUpload(uploadId);
     for (const [index, part] of wanted.entries()) {

@@ -42,11 +42,7 @@ declare module 's3rver' {
     deleteObject(bucket: string, key: string): Promise<void>;
     putMetadata(bucket: string, key: string, metadata: Record<string, unknown>, md5?: string): Promise<void>;
     putPart(bucket: string, uploadId: string, partNumber: string, content: Readable): Promise<{ size: number; md5: string }>;
-    putObjectMultipart(
-      bucket: string,
-      uploadId: string,
-      parts: { number: number; etag: string }[],
-    ): Promise<{ size: number; md5: string }>;
+    putObjectMultipart(bucket: string, uploadId: string, parts: { number: number; etag: string }[]): Promise<{ size: number; md5: string }>;
   }
 
   /** A Koa application; `callback()` is its Node request listener. */

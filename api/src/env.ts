@@ -57,9 +57,18 @@ export const envSchema = z.object({
     .min(2 * GIB, { error: 'expected at least 2147483648 (2 GiB): phone recordings are often that large' })
     .max(5 * 1024 * GIB, { error: 'expected at most 5 TiB (the S3 object limit)' })
     .default(2 * GIB),
-  UPLOAD_QUOTA_BYTES: z.coerce.number({ error: 'expected a number of bytes' }).int().min(2 * GIB).default(20 * GIB),
+  UPLOAD_QUOTA_BYTES: z.coerce
+    .number({ error: 'expected a number of bytes' })
+    .int()
+    .min(2 * GIB)
+    .default(20 * GIB),
   UPLOAD_ABANDON_HOURS: z.coerce.number({ error: 'expected a number of hours' }).int().min(1).default(48),
-  PLAYBACK_URL_MINUTES: z.coerce.number({ error: 'expected a number of minutes' }).int().min(5).max(7 * 24 * 60).default(120),
+  PLAYBACK_URL_MINUTES: z.coerce
+    .number({ error: 'expected a number of minutes' })
+    .int()
+    .min(5)
+    .max(7 * 24 * 60)
+    .default(120),
   WORKER: z.enum(['in-process', 'off'], { error: 'expected in-process or off' }).default('in-process'),
   PROCESSING_TIMEOUT_MINUTES: z.coerce
     .number({ error: 'expected a number of minutes' })

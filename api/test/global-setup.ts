@@ -2,7 +2,9 @@ import pg from 'pg';
 import { migrate } from '../src/db/migrator';
 
 /** Lets several people run API tests on one cluster at once: each prefix has its own template and copies. */
-export const DB_PREFIX = /^[a-z][a-z0-9_]{0,30}$/.test(process.env.PINFIELD_TEST_DB_PREFIX ?? '') ? process.env.PINFIELD_TEST_DB_PREFIX! : 'pinfield';
+export const DB_PREFIX = /^[a-z][a-z0-9_]{0,30}$/.test(process.env.PINFIELD_TEST_DB_PREFIX ?? '')
+  ? process.env.PINFIELD_TEST_DB_PREFIX!
+  : 'pinfield';
 export const TEMPLATE_DB = `${DB_PREFIX}_template`;
 export const COPY_PREFIX = `${DB_PREFIX}_t_`;
 
@@ -29,7 +31,9 @@ export default async function setup(): Promise<() => Promise<void>> {
   return async () => {
     const client = new pg.Client({ connectionString: adminUrl() });
     await client.connect();
-    const { rows } = await client.query<{ datname: string }>('SELECT datname FROM pg_database WHERE starts_with(datname, $1)', [COPY_PREFIX]);
+    const { rows } = await client.query<{ datname: string }>('SELECT datname FROM pg_database WHERE starts_with(datname, $1)', [
+      COPY_PREFIX,
+    ]);
     for (const row of rows) await client.query(`DROP DATABASE IF EXISTS ${row.datname} WITH (FORCE)`);
     await client.end();
   };

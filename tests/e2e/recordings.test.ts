@@ -47,22 +47,48 @@ function libraryRow(page: Page, title: string) {
 
 describe('a teacher uploads recordings', () => {
   it('uploads a generated video through the page; it is processed to ready with a poster', async () => {
-    const file = await makeVideo({ dir, name: 'Fadenpendel Versuch é 1.mp4', seconds: 4, width: 1280, height: 720, fps: 30, codec: 'h264', audio: true });
+    const file = await makeVideo({
+      dir,
+      name: 'Fadenpendel Versuch é 1.mp4',
+      seconds: 4,
+      width: 1280,
+      height: 720,
+      fps: 30,
+      codec: 'h264',
+      audio: true,
+    });
     const page = await openPage();
     await openRecordings(page);
     await page.getByLabel('Video files to upload').setInputFiles(file);
     const row = libraryRow(page, 'Fadenpendel Versuch é 1');
-    await row.getByText(/^(Processing|Ready)/).first().waitFor({ timeout: 30_000 });
+    await row
+      .getByText(/^(Processing|Ready)/)
+      .first()
+      .waitFor({ timeout: 30_000 });
     await screenshot(page, 'recordings-upload-processing');
     await row.getByText('Ready', { exact: true }).waitFor({ timeout: 60_000 });
     const poster = row.getByRole('img');
-    await expect.poll(() => poster.evaluate((img) => ((img as unknown as ImageFacts).complete ? (img as unknown as ImageFacts).naturalWidth : 0)), { timeout: 10_000 }).toBeGreaterThan(0);
+    await expect
+      .poll(() => poster.evaluate((img) => ((img as unknown as ImageFacts).complete ? (img as unknown as ImageFacts).naturalWidth : 0)), {
+        timeout: 10_000,
+      })
+      .toBeGreaterThan(0);
     await screenshot(page, 'recordings-library-ready');
   });
 
   it('resumes an upload cut off midway after a reload, sending only the parts storage lacks', async () => {
     // About 10 MiB: a part of 8 MiB (partSizeFor) and a short last part, which is held back.
-    const file = await makeVideo({ dir, name: 'Resume test.mp4', seconds: 5, width: 1280, height: 720, fps: 30, codec: 'h264', audio: false, bitrateKbps: 16_000 });
+    const file = await makeVideo({
+      dir,
+      name: 'Resume test.mp4',
+      seconds: 5,
+      width: 1280,
+      height: 720,
+      fps: 30,
+      codec: 'h264',
+      audio: false,
+      bitrateKbps: 16_000,
+    });
     expect((await stat(file)).size).toBeGreaterThan(8 * 1024 * 1024);
     const page = await openPage();
     await openRecordings(page);
@@ -95,12 +121,24 @@ describe('a teacher uploads recordings', () => {
       if (part !== null) sent.push(part);
     });
     await page.getByLabel('File for Resume test.mp4').setInputFiles(file);
-    await libraryRow(page, 'Resume test').getByText(/^(Processing|Ready)/).first().waitFor({ timeout: 30_000 });
+    await libraryRow(page, 'Resume test')
+      .getByText(/^(Processing|Ready)/)
+      .first()
+      .waitFor({ timeout: 30_000 });
     expect(sent).toEqual([2]);
   });
 
   it('keeps a file queued while storage is unreachable and sends it on Retry', async () => {
-    const file = await makeVideo({ dir, name: 'Storage outage.mp4', seconds: 2, width: 640, height: 360, fps: 25, codec: 'h264', audio: true });
+    const file = await makeVideo({
+      dir,
+      name: 'Storage outage.mp4',
+      seconds: 2,
+      width: 640,
+      height: 360,
+      fps: 25,
+      codec: 'h264',
+      audio: true,
+    });
     const page = await openPage();
     await openRecordings(page);
     await page.route(/uploadId=/, (route) => route.abort('connectionrefused'));
@@ -109,7 +147,10 @@ describe('a teacher uploads recordings', () => {
     await screenshot(page, 'recordings-storage-down');
     await page.unroute(/uploadId=/);
     await page.getByRole('button', { name: 'Retry the upload of Storage outage.mp4' }).click();
-    await libraryRow(page, 'Storage outage').getByText(/^(Processing|Ready)/).first().waitFor({ timeout: 30_000 });
+    await libraryRow(page, 'Storage outage')
+      .getByText(/^(Processing|Ready)/)
+      .first()
+      .waitFor({ timeout: 30_000 });
   });
 
   it('a PDF renamed as a video ends failed, saying what the file really is', async () => {

@@ -101,7 +101,7 @@ async function tolerateToolError(run: Promise<unknown>): Promise<void> {
   try {
     await run;
   } catch (error) {
-    if (!(error instanceof ToolError)) throw error;
+    if (!(error instanceof ToolError) || error.killedBy) throw error;
   }
 }
 

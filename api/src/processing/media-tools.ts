@@ -20,6 +20,8 @@ export class ToolError extends Error {
     readonly tool: string,
     message: string,
     readonly stderr: string,
+    /** Set when a signal ended the tool (a shutdown, the OOM killer): that says nothing about the file. */
+    readonly killedBy: string | null = null,
   ) {
     super(`${tool}: ${message}`);
   }
@@ -78,7 +80,7 @@ export function runTool(
       signal?.removeEventListener('abort', onAbort);
       if (signal?.aborted) reject(signal.reason);
       else if (code === 0) resolvePromise({ stdout, stderr });
-      else reject(new ToolError(tool, killedBy ? `killed by ${killedBy}` : `exited with code ${code}`, stderr));
+      else reject(new ToolError(tool, killedBy ? `killed by ${killedBy}` : `exited with code ${code}`, stderr, killedBy));
     });
   });
 }
@@ -124,7 +126,7 @@ export function runFfmpeg(configure: (command: FfmpegCommand) => void, options: 
     command.on('error', (error: Error, _stdout: string | null, stderr: string | null) => {
       signal?.removeEventListener('abort', onAbort);
       if (signal?.aborted) reject(signal.reason);
-      else reject(new ToolError('ffmpeg', error.message, stderr ?? ''));
+      else reject(new ToolError('ffmpeg', error.message, stderr ?? '', /killed with signal (\w+)/.exec(error.message)?.[1] ?? null));
     });
     command.on('end', () => {
       signal?.removeEventListener('abort', onAbort);

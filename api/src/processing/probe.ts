@@ -85,7 +85,8 @@ export async function probeDetails(filePath: string, options: Partial<ToolRunOpt
       run,
     ));
   } catch (error) {
-    if (!(error instanceof ToolError)) throw error;
+    // A killed ffprobe is no verdict on the file: let the job fail as retryable.
+    if (!(error instanceof ToolError) || error.killedBy) throw error;
     // An MP4 copied only in part loses the index (moov) that phones write at the end.
     const kind = await sniffKind(filePath);
     if (isIsoMediaMime(kind.mime)) throw new MediaFailure('truncated', FAILURE_MESSAGES.incomplete, false, { cause: error });

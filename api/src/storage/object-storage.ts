@@ -173,7 +173,9 @@ export function createObjectStorage(config: StorageConfig) {
     },
 
     async put(key: string, body: Buffer | Readable, contentType: string, contentLength?: number): Promise<void> {
-      await call(() => client.send(new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, ContentLength: contentLength })));
+      await call(() =>
+        client.send(new PutObjectCommand({ Bucket, Key: key, Body: body, ContentType: contentType, ContentLength: contentLength })),
+      );
     },
 
     /** The first `length` bytes of an object (for sniffing its type), or fewer if it is shorter. */

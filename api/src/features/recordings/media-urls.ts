@@ -24,7 +24,11 @@ export function playbackLifetimeSeconds(playbackMinutes: number, durationSeconds
  * signs afresh. `expiresInSeconds` overrides the lifetime (tests sign 1-second URLs through it).
  */
 export function createMediaUrls(storage: ObjectStorage, playbackMinutes: number) {
-  async function sign(key: string, expiresInSeconds: number, extra: { contentType?: string; contentDisposition?: string } = {}): Promise<SignedUrl> {
+  async function sign(
+    key: string,
+    expiresInSeconds: number,
+    extra: { contentType?: string; contentDisposition?: string } = {},
+  ): Promise<SignedUrl> {
     const signedAt = Date.now();
     const url = await storage.signGet(key, { expiresInSeconds, ...extra });
     return { url, expiresAt: new Date(signedAt + expiresInSeconds * 1000).toISOString() };
