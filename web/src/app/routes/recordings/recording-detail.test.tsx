@@ -47,6 +47,8 @@ describe('recording detail', { timeout: 20_000 }, () => {
     expect(facts).toHaveTextContent('Length00:41');
     expect(facts).toHaveTextContent('1280 × 720 pixels, turned 90° when played');
     expect(facts).toHaveTextContent('29.97 frames per second');
+    expect(facts).toHaveTextContent('Video formatH.264');
+    expect(facts).toHaveTextContent('Sound formatAAC');
     expect(facts).toHaveTextContent('Converted to H.264 video and AAC sound');
     expect(facts).toHaveTextContent('pendulum-release.mp4');
 

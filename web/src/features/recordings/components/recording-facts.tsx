@@ -5,6 +5,28 @@ import { formatDateTime, type SchoolClock } from '@/lib/format';
 
 const LATER = 'Known after processing';
 
+/** ffprobe's codec names as people read them on a camera or in a file manager. */
+const CODEC_NAMES: Record<string, string> = {
+  h264: 'H.264',
+  hevc: 'HEVC (H.265)',
+  av1: 'AV1',
+  vp8: 'VP8',
+  vp9: 'VP9',
+  mpeg4: 'MPEG-4 Part 2',
+  mpeg2video: 'MPEG-2',
+  prores: 'ProRes',
+  aac: 'AAC',
+  mp3: 'MP3',
+  opus: 'Opus',
+  vorbis: 'Vorbis',
+  ac3: 'Dolby Digital (AC-3)',
+  pcm_s16le: 'PCM (uncompressed)',
+};
+
+export function codecName(codec: string): string {
+  return CODEC_NAMES[codec] ?? codec.toUpperCase();
+}
+
 function picture(recording: RecordingDto): string {
   if (recording.width === null || recording.height === null) return LATER;
   const turned = recording.rotation ? `, turned ${Math.abs(recording.rotation)}° when played` : '';
@@ -18,7 +40,7 @@ function webVersion(recording: RecordingDto): string {
 }
 
 function sound(recording: RecordingDto): string {
-  if (recording.audioCodec) return recording.audioCodec;
+  if (recording.audioCodec) return codecName(recording.audioCodec);
   return recording.state === 'ready' ? 'No sound track' : LATER;
 }
 
@@ -28,7 +50,7 @@ export function RecordingFacts({ recording, clock }: { recording: RecordingDto; 
     ['Length', recording.durationSeconds === null ? LATER : <span className="font-mono">{formatDuration(recording.durationSeconds)}</span>],
     ['Picture', picture(recording)],
     ['Frame rate', recording.frameRate === null ? LATER : `${Number(recording.frameRate.toFixed(2))} frames per second`],
-    ['Video format', recording.videoCodec ?? LATER],
+    ['Video format', recording.videoCodec === null ? LATER : codecName(recording.videoCodec)],
     ['Sound format', sound(recording)],
     ['File size', formatBytes(recording.sizeBytes)],
     ['Web version', webVersion(recording)],
