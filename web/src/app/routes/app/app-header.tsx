@@ -1,15 +1,14 @@
-import { NavLink } from 'react-router-dom';
 import type { MeDto } from '@core/contracts';
 import { ROLE_LABELS, type Role } from '@core/roles';
 import { Brand } from '@/components/layouts/brand';
+import { TabNav, type TabLink } from '@/components/ui/tab-nav';
 import { paths, roleHome } from '@/config/paths';
-import { cn } from '@/lib/cn';
 import { activeMembership } from '@/features/auth/api/get-me';
 import { RoleSwitcher } from '@/features/auth/components/role-switcher';
 import { SignOutButton } from '@/features/auth/components/sign-out-button';
 
 // The sections of a role with more than one page; the admin section has its own navigation.
-const SECTIONS: Partial<Record<Role, { to: string; label: string; end: boolean }[]>> = {
+const SECTIONS: Partial<Record<Role, TabLink[]>> = {
   teacher: [
     { to: paths.teacher.home, label: 'Classes', end: true },
     { to: paths.teacher.recordings, label: 'Recordings', end: false },
@@ -19,28 +18,7 @@ const SECTIONS: Partial<Record<Role, { to: string; label: string; end: boolean }
 function SectionNav({ role }: { role: Role }) {
   const links = SECTIONS[role];
   if (!links) return null;
-  return (
-    <nav aria-label={`${ROLE_LABELS[role]} pages`} className="mx-auto max-w-6xl px-4 sm:px-6">
-      <ul className="flex flex-wrap gap-x-1">
-        {links.map((link) => (
-          <li key={link.to}>
-            <NavLink
-              to={link.to}
-              end={link.end}
-              className={({ isActive }) =>
-                cn(
-                  'inline-flex min-h-11 items-center border-b-4 px-3 font-bold whitespace-nowrap no-underline',
-                  isActive ? 'border-copper text-ink' : 'border-transparent text-ink-muted hover:text-ink',
-                )
-              }
-            >
-              {link.label}
-            </NavLink>
-          </li>
-        ))}
-      </ul>
-    </nav>
-  );
+  return <TabNav label={`${ROLE_LABELS[role]} pages`} links={links} className="mx-auto max-w-6xl px-4 sm:px-6" />;
 }
 
 /**
