@@ -47,7 +47,8 @@ describe('startFakeServices', () => {
     const fakes = await startFakeServices(options({ s3: 0, oidc: 0, smtp: 0, mailWeb: 0 }));
     const inboxPort = Number(new URL(fakes.urls.inbox).port);
     expect((await fetch(`${fakes.urls.inbox}/api/messages`)).status).toBe(200);
-    expect((await fetch(`${fakes.urls.s3}/index-bucket`)).status).toBe(200);
+    // Up and private: an unsigned request is refused, as by a real bucket that is not public.
+    expect((await fetch(`${fakes.urls.s3}/index-bucket`)).status).toBe(403);
     await fakes.close();
     // The port is free again: nothing is left listening.
     await close(await listen(inboxPort));

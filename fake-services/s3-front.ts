@@ -43,6 +43,8 @@ export function createS3Handler(s3: S3rver, options: { pageLimit: number }): Req
         method === 'OPTIONS'
           ? 'anonymous'
           : checkSignature({ method, path: target.path, rawQuery: target.rawQuery, headers: req.headers }, knownSecrets(), new Date());
+      // The bucket is private, as the product's must be: an unsigned request reads and writes nothing.
+      if (auth === 'anonymous' && method !== 'OPTIONS') throw new S3Error('AccessDenied', 'Access Denied');
       if (isObjectRead(target)) {
         // Media is served with nosniff so a browser never runs an upload as another type. Real S3
         // does not send it: in production the bucket's CDN/proxy adds it.
