@@ -5,7 +5,7 @@ import { rm } from 'node:fs/promises';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { makeMediaDir, makeVideo } from '../../tests/fixtures/media/generate';
 import { createTestDatabase, type TestDatabase } from '../test/test-db';
-import { buildProcessingRecording, recordingRow, silentLogger, testStorage, waitFor } from './jobs/jobs.test-support';
+import { buildProcessingRecording, recordingRow, silentLogger, TEST_SETTINGS, testStorage, waitFor } from './jobs/jobs.test-support';
 import { createJobQueue } from './jobs/pg-boss-queue';
 import type { ObjectStorage } from './storage/object-storage';
 
@@ -83,7 +83,7 @@ describe('the app and the worker as processes', { timeout: 120_000 }, () => {
     const sender = await createJobQueue({
       databaseUrl: database.url,
       db: database.knex,
-      settings: { expireInSeconds: 600, retryLimit: 3, retryDelaySeconds: 1 },
+      settings: TEST_SETTINGS,
       logger: silentLogger,
       maintenance: false,
     });

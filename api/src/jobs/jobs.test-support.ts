@@ -8,6 +8,8 @@ import { createLogger } from '../logger';
 import { createObjectStorage, storageConfigFromEnv, type ObjectStorage } from '../storage/object-storage';
 import { buildMember } from '../../test/factories';
 import type { QueueSettings } from './queue-settings';
+import type { PgBossJobQueue } from './pg-boss-queue';
+import { startWorker, type RecordingWorker, type WorkerOptions } from './start-worker';
 
 export const silentLogger = createLogger('silent');
 
@@ -80,4 +82,23 @@ export async function jobsOf(db: Knex, queue: string, recordingId: string) {
     [queue, recordingId],
   );
   return result.rows;
+}
+
+/** A worker on the test database and storage that polls twice a second, as the tests need. */
+export function startTestWorker(
+  queue: PgBossJobQueue,
+  db: Knex,
+  storage: ObjectStorage,
+  options: Partial<WorkerOptions> = {},
+): Promise<RecordingWorker> {
+  return startWorker({
+    queue,
+    db,
+    storage,
+    logger: silentLogger,
+    nice: 10,
+    uploadAbandonHours: 48,
+    pollingIntervalSeconds: 0.5,
+    ...options,
+  });
 }

@@ -8,9 +8,18 @@ import { makeMediaDir, makeVideo } from '../../../tests/fixtures/media/generate'
 import { createTestDatabase, type TestDatabase } from '../../test/test-db';
 import type { ObjectStorage } from '../storage/object-storage';
 import { QUEUES } from './job-queue';
-import { buildProcessingRecording, jobsOf, recordingRow, silentLogger, testStorage, waitFor } from './jobs.test-support';
+import {
+  buildProcessingRecording,
+  jobsOf,
+  recordingRow,
+  silentLogger,
+  startTestWorker,
+  TEST_SETTINGS,
+  testStorage,
+  waitFor,
+} from './jobs.test-support';
 import { createJobQueue, type PgBossJobQueue } from './pg-boss-queue';
-import { startWorker, type RecordingWorker } from './start-worker';
+import type { RecordingWorker } from './start-worker';
 
 const FIXTURE = fileURLToPath(new URL('./worker-death.fixture.ts', import.meta.url));
 const ROOT = fileURLToPath(new URL('../../../', import.meta.url));
@@ -43,7 +52,7 @@ describe('a worker that dies mid-job', { timeout: 120_000 }, () => {
     const sender = await createJobQueue({
       databaseUrl: database.url,
       db: database.knex,
-      settings: { expireInSeconds: 600, retryLimit: 3, retryDelaySeconds: 1 },
+      settings: TEST_SETTINGS,
       logger: silentLogger,
       maintenance: false,
     });
@@ -82,20 +91,12 @@ describe('a worker that dies mid-job', { timeout: 120_000 }, () => {
     queue = await createJobQueue({
       databaseUrl: database.url,
       db: database.knex,
-      settings: { expireInSeconds: 600, retryLimit: 3, retryDelaySeconds: 1 },
+      settings: TEST_SETTINGS,
       logger: silentLogger,
       maintenance: true,
       maintenanceIntervalSeconds: 1,
     });
-    worker = await startWorker({
-      queue,
-      db: database.knex,
-      storage,
-      logger: silentLogger,
-      nice: 10,
-      uploadAbandonHours: 48,
-      pollingIntervalSeconds: 0.5,
-    });
+    worker = await startTestWorker(queue, database.knex, storage);
 
     const ready = await waitFor(async () => {
       const row = await recordingRow(database.knex, recording.id);

@@ -9,11 +9,11 @@ import { FAILURE_MESSAGES, MediaFailure } from '../processing/media-failure';
 import type { ObjectStorage } from '../storage/object-storage';
 import { CLEAN_UPLOADS_CRON } from './clean-abandoned-uploads';
 import { QUEUES } from './job-queue';
-import { buildProcessingRecording, jobsOf, recordingRow, silentLogger, testStorage, waitFor } from './jobs.test-support';
+import { buildProcessingRecording, jobsOf, recordingRow, silentLogger, startTestWorker, testStorage, waitFor } from './jobs.test-support';
 import { createJobQueue, type PgBossJobQueue } from './pg-boss-queue';
 import type { ProcessMedia } from './process-recording';
 import type { QueueSettings } from './queue-settings';
-import { startWorker, type RecordingWorker, type WorkerOptions } from './start-worker';
+import type { RecordingWorker, WorkerOptions } from './start-worker';
 
 describe('the worker, through pg-boss', { timeout: 90_000 }, () => {
   let database: TestDatabase;
@@ -32,16 +32,7 @@ describe('the worker, through pg-boss', { timeout: 90_000 }, () => {
       maintenance: true,
       maintenanceIntervalSeconds: 1,
     });
-    const worker = await startWorker({
-      queue,
-      db: database.knex,
-      storage,
-      logger: silentLogger,
-      nice: 10,
-      uploadAbandonHours: 48,
-      pollingIntervalSeconds: 0.5,
-      ...options,
-    });
+    const worker = await startTestWorker(queue, database.knex, storage, options);
     running.push({ queue, worker });
     return { queue, worker };
   }

@@ -1,8 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { UploadPartCommand } from '@aws-sdk/client-s3';
-import { createTestApp, signedInClient, type TestApp } from '../../../test/test-app';
-import { buildMember } from '../../../test/factories';
-import { deleteSchoolObjects, fakeFile, insertStoredRecording, MIB, sendParts, startUpload } from './uploads.test-support';
+import { createTestApp, type TestApp } from '../../../test/test-app';
+import { deleteSchoolObjects, fakeFile, insertStoredRecording, MIB, sendParts, startUpload, newTeacher } from './uploads.test-support';
 
 const GIB = 1024 * MIB;
 
@@ -16,14 +15,9 @@ afterAll(async () => {
   await t.close();
 });
 
-async function teacher() {
-  const person = await buildMember(t.db, { roles: ['teacher'] });
-  return { person, client: await signedInClient(t, person.email) };
-}
-
 describe('checking the stored object on completion', () => {
   it('a stored size other than the declared one deletes the object and leaves the recording failed', async () => {
-    const { client } = await teacher();
+    const { client } = await newTeacher(t);
     const file = fakeFile(11 * MIB);
     const upload = await startUpload(client, file.create);
     const [first] = await sendParts(client, upload, file.bytes, [1]);
@@ -54,7 +48,7 @@ describe('checking the stored object on completion', () => {
   });
 
   it('a file that no longer fits the quota when it completes is deleted, the recording failed', async () => {
-    const { person, client } = await teacher();
+    const { person, client } = await newTeacher(t);
     const file = fakeFile(11 * MIB);
     const upload = await startUpload(client, file.create);
     const parts = await sendParts(client, upload, file.bytes, [1, 2]);

@@ -1,7 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { Client, createTestApp, signedInClient, type TestApp } from '../../../test/test-app';
-import { buildMember } from '../../../test/factories';
-import { deleteSchoolObjects, fakeFile, MIB, sendParts, sha256, startUpload } from './uploads.test-support';
+import { Client, createTestApp, type TestApp } from '../../../test/test-app';
+import { deleteSchoolObjects, fakeFile, MIB, sendParts, sha256, startUpload, newTeacher } from './uploads.test-support';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -12,14 +11,9 @@ afterAll(async () => {
   await t.close();
 });
 
-async function teacher() {
-  const person = await buildMember(t.db, { roles: ['teacher'] });
-  return { person, client: await signedInClient(t, person.email) };
-}
-
 describe('resuming after a reload', () => {
   it('lists the stored parts, matches the re-chosen file, and sends only the missing part', async () => {
-    const { person, client } = await teacher();
+    const { person, client } = await newTeacher(t);
     const file = fakeFile(11 * MIB, 'Eddy currents – Jörg’s tube.mov', 'video/quicktime');
     const upload = await startUpload(client, file.create);
     const [first] = await sendParts(client, upload, file.bytes, [1]);
@@ -50,7 +44,7 @@ describe('resuming after a reload', () => {
   });
 
   it('refuses a different file, naming what differs', async () => {
-    const { client } = await teacher();
+    const { client } = await newTeacher(t);
     const file = fakeFile(11 * MIB, 'Pendulum.mp4');
     const upload = await startUpload(client, file.create);
     const resume = (change: Record<string, unknown>) =>
@@ -79,7 +73,7 @@ describe('resuming after a reload', () => {
   });
 
   it('tells two sizes that read alike apart in bytes', async () => {
-    const { client } = await teacher();
+    const { client } = await newTeacher(t);
     const file = fakeFile(11 * MIB);
     const upload = await startUpload(client, file.create);
     const res = await client.send('post', `/api/uploads/${upload.id}/resume`, { ...file.facts, size: 11 * MIB + 1 });
@@ -89,7 +83,7 @@ describe('resuming after a reload', () => {
 
 describe('completing with parts missing or wrong', () => {
   it('says which parts are not stored yet, and which do not match', async () => {
-    const { client } = await teacher();
+    const { client } = await newTeacher(t);
     const file = fakeFile(11 * MIB);
     const upload = await startUpload(client, file.create);
     const [first] = await sendParts(client, upload, file.bytes, [1]);
@@ -119,7 +113,7 @@ describe('completing with parts missing or wrong', () => {
 
 describe('cancelling an upload', () => {
   it('aborts it in storage, marks it aborted and deletes its recording row', async () => {
-    const { client } = await teacher();
+    const { client } = await newTeacher(t);
     const file = fakeFile(11 * MIB);
     const upload = await startUpload(client, file.create);
     await sendParts(client, upload, file.bytes, [1]);

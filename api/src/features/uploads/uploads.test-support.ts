@@ -1,9 +1,16 @@
 import { createHash, randomBytes, randomUUID } from 'node:crypto';
 import { partLength, partSizeFor } from '@core/recordings';
 import type { UploadDto } from '@core/contracts';
-import type { Client, TestApp } from '../../../test/test-app';
+import { signedInClient, type Client, type TestApp } from '../../../test/test-app';
+import { buildMember } from '../../../test/factories';
 
 export const MIB = 1024 * 1024;
+
+/** A teacher of a fresh school, signed in through the real e-mail link. */
+export async function newTeacher(t: TestApp) {
+  const person = await buildMember(t.db, { roles: ['teacher'] });
+  return { person, client: await signedInClient(t, person.email) };
+}
 
 /** A fake "video": random bytes (the API never reads them; only the worker sniffs). */
 export function fakeFile(size: number, fileName = 'Pendulum demo.mp4', type = 'video/mp4', lastModified = 1_764_000_000_000) {

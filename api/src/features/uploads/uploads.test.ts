@@ -12,6 +12,7 @@ import {
   sendParts,
   sha256,
   startUpload,
+  newTeacher,
 } from './uploads.test-support';
 
 const GIB = 1024 * MIB;
@@ -24,11 +25,6 @@ afterAll(async () => {
   await deleteSchoolObjects(t);
   await t.close();
 });
-
-async function teacher() {
-  const person = await buildMember(t.db, { roles: ['teacher'] });
-  return { person, client: await signedInClient(t, person.email) };
-}
 
 describe('starting an upload: who may', () => {
   it('401 when signed out, 403 for a student', async () => {
@@ -49,7 +45,7 @@ describe('starting an upload: bad input, each with its own sentence', () => {
     ['a sound file', { type: 'audio/mpeg', fileName: 'tone.mp3' }, 400, 'not_video', 'This file is audio only, not a video.'],
   ];
   it.each(cases)('refuses %s', async (_name, override, status, code, message) => {
-    const { person, client } = await teacher();
+    const { person, client } = await newTeacher(t);
     const res = await client.send('post', '/api/uploads', { ...fakeFile(10).create, ...override });
     expect(res.status).toBe(status);
     expect(res.body.error.code).toBe(code);
@@ -58,7 +54,7 @@ describe('starting an upload: bad input, each with its own sentence', () => {
   });
 
   it('refuses a file with no type whose name is not a video’s', async () => {
-    const { client } = await teacher();
+    const { client } = await newTeacher(t);
     const res = await client.send('post', '/api/uploads', { ...fakeFile(10).create, type: '', fileName: 'notes.txt' });
     expect(res.status).toBe(400);
     expect(res.body.error.code).toBe('not_video');
@@ -66,7 +62,7 @@ describe('starting an upload: bad input, each with its own sentence', () => {
   });
 
   it('accepts a file with no type or a generic one when its name is a video’s', async () => {
-    const { client } = await teacher();
+    const { client } = await newTeacher(t);
     for (const [type, fileName] of [
       ['', 'clip.MOV'],
       ['application/octet-stream', 'camera 0001.mts'],
@@ -77,14 +73,14 @@ describe('starting an upload: bad input, each with its own sentence', () => {
   });
 
   it('names a malformed request field', async () => {
-    const { client } = await teacher();
+    const { client } = await newTeacher(t);
     const res = await client.send('post', '/api/uploads', { ...fakeFile(10).create, firstPartSha256: 'abc' });
     expect(res.status).toBe(400);
     expect(res.body.error.message).toBe('firstPartSha256: Expected the SHA-256 of the first part, as 64 lowercase hex digits.');
   });
 
   it('refuses a file that would pass the quota, naming what is used and the limit', async () => {
-    const { person, client } = await teacher();
+    const { person, client } = await newTeacher(t);
     await insertStoredRecording(t, person, 19 * GIB + 512 * MIB);
     // Failed uploads whose object was deleted take no space (size_mismatch deletes the object).
     await insertStoredRecording(t, person, 5 * GIB, { state: 'failed', failure_code: 'size_mismatch' });
@@ -101,7 +97,7 @@ describe('starting an upload: bad input, each with its own sentence', () => {
 
 describe('the whole path: start, sign, PUT straight to storage, complete', () => {
   it('an 11 MiB file in two parts ends as a recording queued for processing', async () => {
-    const { person, client } = await teacher();
+    const { person, client } = await newTeacher(t);
     const file = fakeFile(11 * MIB, 'Falling magnet, take 2.mp4');
     const upload = UploadDtoSchema.parse(await startUpload(client, file.create));
     expect(upload).toMatchObject({ fileName: 'Falling magnet, take 2.mp4', size: 11 * MIB, partSize: 8 * MIB, partCount: 2 });
@@ -154,7 +150,7 @@ describe('the whole path: start, sign, PUT straight to storage, complete', () =>
 
 describe('signing parts', () => {
   it('refuses a part number beyond the upload’s part count, and part 0', async () => {
-    const { client } = await teacher();
+    const { client } = await newTeacher(t);
     const upload = await startUpload(client, fakeFile(11 * MIB).create);
     const beyond = await client.send('post', `/api/uploads/${upload.id}/parts/3`);
     expect(beyond.status).toBe(400);
@@ -165,7 +161,7 @@ describe('signing parts', () => {
   });
 
   it('a part URL is good for an hour and refuses a body of another length', async () => {
-    const { client } = await teacher();
+    const { client } = await newTeacher(t);
     const file = fakeFile(11 * MIB);
     const upload = await startUpload(client, file.create);
     const before = Date.now();

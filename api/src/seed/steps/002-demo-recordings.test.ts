@@ -1,9 +1,8 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { createTestDatabase, type TestDatabase } from '../../../test/test-db';
 import { QUEUES } from '../../jobs/job-queue';
-import { recordingRow, silentLogger, testStorage, waitFor } from '../../jobs/jobs.test-support';
+import { recordingRow, silentLogger, startTestWorker, TEST_SETTINGS, testStorage, waitFor } from '../../jobs/jobs.test-support';
 import { createJobQueue } from '../../jobs/pg-boss-queue';
-import { startWorker } from '../../jobs/start-worker';
 import type { ObjectStorage } from '../../storage/object-storage';
 import { seedPeopleAndClasses } from './001-people-and-classes';
 import { seedDemoRecordings } from './002-demo-recordings';
@@ -72,19 +71,11 @@ describe('seed step 002: demo recordings through the upload pipeline', { timeout
     const queue = await createJobQueue({
       databaseUrl: database.url,
       db: database.knex,
-      settings: { expireInSeconds: 600, retryLimit: 3, retryDelaySeconds: 1 },
+      settings: TEST_SETTINGS,
       logger: silentLogger,
       maintenance: false,
     });
-    const worker = await startWorker({
-      queue,
-      db: database.knex,
-      storage,
-      logger: silentLogger,
-      nice: 10,
-      uploadAbandonHours: 48,
-      pollingIntervalSeconds: 0.5,
-    });
+    const worker = await startTestWorker(queue, database.knex, storage);
     try {
       for (const row of rows) await waitFor(async () => (await recordingRow(database.knex, row.id as string))?.state !== 'processing');
     } finally {
