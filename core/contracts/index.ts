@@ -5,3 +5,6 @@ export * from './departments';
 export * from './people';
 export * from './school';
 export * from './recordings';
+export * from './checkpoints';
+export * from './lessons';
+export * from './student-checkpoints';
