@@ -29,6 +29,15 @@ import { createUploadsService } from './features/uploads/uploads.service';
 import { uploadsRoutes } from './features/uploads/uploads.routes';
 import { createRecordingsServices } from './features/recordings/recordings.service';
 import { recordingsRoutes } from './features/recordings/recordings.routes';
+import { createLessonsServices } from './features/lessons/lessons.service';
+import { lessonsRoutes } from './features/lessons/lessons.routes';
+import { createLessonPreviewService } from './features/lessons/lesson-preview.service';
+import { lessonPreviewRoutes } from './features/lessons/lesson-preview.routes';
+import { createLessonTransferService } from './features/lessons/lesson-transfer.service';
+import { lessonTransferRoutes } from './features/lessons/lesson-transfer.routes';
+import { lessonVttRoutes } from './features/lessons/lesson-vtt.routes';
+import { createLessonImagesService } from './features/lesson-images/lesson-images.service';
+import { lessonImagesRoutes } from './features/lesson-images/lesson-images.routes';
 import { webApp } from './web-app';
 
 export interface AppDeps {
@@ -115,6 +124,19 @@ export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAc
   api.use(uploadsRoutes(createUploadsService({ db, storage, jobs, env })));
   // recordings: uploads and library routes are mounted here (storage, jobs)
   api.use(recordingsRoutes(createRecordingsServices({ db, storage, jobs, playbackMinutes: env.PLAYBACK_URL_MINUTES })));
+  api.use(lessonsRoutes(createLessonsServices({ db, storage, playbackMinutes: env.PLAYBACK_URL_MINUTES })));
+  // B2: preview as student, lesson files, WebVTT tracks and lesson images.
+  api.use(lessonPreviewRoutes(createLessonPreviewService({ db })));
+  api.use(
+    lessonTransferRoutes(
+      createLessonTransferService({
+        db,
+        lessons: createLessonsServices({ db, storage, playbackMinutes: env.PLAYBACK_URL_MINUTES }).lessons,
+      }),
+    ),
+  );
+  api.use(lessonVttRoutes({ db }));
+  api.use(lessonImagesRoutes(createLessonImagesService({ db, storage })));
   api.use(apiNotFound);
 
   app.use('/api', api);

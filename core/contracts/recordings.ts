@@ -1,6 +1,7 @@
 import { z } from 'zod';
 import { LIMITS } from '../limits';
 import { IdSchema } from './common';
+import { LessonStateSchema } from './lessons';
 
 export const RECORDING_STATES = ['uploading', 'processing', 'ready', 'failed'] as const;
 export const RecordingStateSchema = z.enum(RECORDING_STATES);
@@ -142,6 +143,8 @@ export const RecordingDtoSchema = z.object({
   canEdit: z.boolean(),
   /** The unfinished upload behind an `uploading` recording. */
   uploadId: IdSchema.nullable(),
+  /** The school's lessons built on it; while any remain the recording cannot be deleted. */
+  usedBy: z.array(z.object({ id: IdSchema, title: z.string(), state: LessonStateSchema })),
   createdAt: z.string(),
   updatedAt: z.string(),
 });

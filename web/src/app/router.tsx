@@ -15,6 +15,12 @@ const roleSection = (role: Role, path: string, children: RouteObject[]): RouteOb
   children,
 });
 
+// Lessons open read-only in every staff section; only a lesson's owner (a teacher) sees the studio's editing.
+const lessonPages: RouteObject[] = [
+  { path: 'lessons', lazy: page(() => import('./routes/lessons/lessons')) },
+  { path: 'lessons/:lessonId', lazy: page(() => import('./routes/lessons/lesson-overview')) },
+];
+
 export const routes: RouteObject[] = [
   {
     element: <RootLayout />,
@@ -33,10 +39,18 @@ export const routes: RouteObject[] = [
             { path: 'classes/:classId', lazy: page(() => import('./routes/homes/teacher-class')) },
             { path: 'recordings', lazy: page(() => import('./routes/recordings/recordings')) },
             { path: 'recordings/:recordingId', lazy: page(() => import('./routes/recordings/recording-detail')) },
+            { path: 'lessons/new', lazy: page(() => import('./routes/lessons/lesson-new')) },
+            ...lessonPages,
           ]),
           roleSection('student', 'student', [{ index: true, lazy: page(() => import('./routes/homes/student-home')) }]),
-          roleSection('coordinator', 'coordinator', [{ index: true, lazy: page(() => import('./routes/homes/coordinator-home')) }]),
-          roleSection('substitute', 'substitute', [{ index: true, lazy: page(() => import('./routes/homes/substitute-home')) }]),
+          roleSection('coordinator', 'coordinator', [
+            { index: true, lazy: page(() => import('./routes/homes/coordinator-home')) },
+            ...lessonPages,
+          ]),
+          roleSection('substitute', 'substitute', [
+            { index: true, lazy: page(() => import('./routes/homes/substitute-home')) },
+            ...lessonPages,
+          ]),
           {
             path: 'admin',
             lazy: page(() => import('./routes/admin/admin-layout')),

@@ -12,6 +12,14 @@ export const paths = {
     recordings: '/teacher/recordings',
     recording: (recordingId: string) => `/teacher/recordings/${recordingId}`,
   },
+  /** Lesson pages live in each staff section ('/teacher', '/substitute', '/coordinator'): pass the section's base. */
+  lessons: {
+    list: (base: string) => `${base}/lessons`,
+    create: (recordingId?: string) => `/teacher/lessons/new${recordingId ? `?recording=${encodeURIComponent(recordingId)}` : ''}`,
+    overview: (base: string, lessonId: string) => `${base}/lessons/${lessonId}`,
+    studio: (lessonId: string) => `/teacher/lessons/${lessonId}/studio`,
+    preview: (base: string, lessonId: string) => `${base}/lessons/${lessonId}/preview`,
+  },
   student: { home: '/student' },
   coordinator: { home: '/coordinator' },
   substitute: { home: '/substitute' },

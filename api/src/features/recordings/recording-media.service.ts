@@ -5,7 +5,7 @@ import type { ObjectStorage } from '../../storage/object-storage';
 import { ConflictError, NotFoundError } from '../../errors';
 import { listCaptions } from './captions.repository';
 import { loadViewable } from './recording-access';
-import type { RecordingView } from './recordings.read-model';
+import { findRecordingView, type RecordingView } from './recordings.read-model';
 import { presentCaption, thumbnailsPath } from './recordings.presenter';
 import { buildThumbnailsVtt, parseThumbnailGrid } from './thumbnails-vtt';
 import type { MediaUrls } from './media-urls';
@@ -44,24 +44,52 @@ export function createRecordingMediaService({ db, storage, urls }: Deps) {
     return row.durationSeconds ?? tiles * (grid?.intervalSeconds ?? 0);
   }
 
+  async function playbackOf(found: RecordingView): Promise<PlaybackDto> {
+    const row = requireReady(found);
+    const duration = durationOf(row);
+    const src = await urls.playback(row.renditionKey, duration);
+    const poster = row.posterKey ? await urls.playback(row.posterKey, duration) : null;
+    const captions = await listCaptions(db, row.id);
+    return {
+      recordingId: row.id,
+      src: { url: src.url, type: 'video/mp4' },
+      posterUrl: poster?.url ?? null,
+      expiresAt: src.expiresAt,
+      durationSeconds: duration,
+      width: row.width ?? 0,
+      height: row.height ?? 0,
+      thumbnailsUrl: parseThumbnailGrid(row.thumbnails) ? thumbnailsPath(row.id) : null,
+      captions: captions.map(presentCaption),
+    };
+  }
+
+  async function thumbnailsVttOf(found: RecordingView): Promise<string> {
+    const row = requireReady(found);
+    const grid = parseThumbnailGrid(row.thumbnails);
+    if (!grid) throw new NotFoundError('The thumbnail track of this recording');
+    const duration = durationOf(row);
+    const sheetUrls = await Promise.all(grid.sheets.map(async (sheet) => (await urls.playback(sheet.key, duration)).url));
+    return buildThumbnailsVtt(grid, duration, sheetUrls);
+  }
+
+  /** A recording the caller's route has already authorised through something else (a lesson they may view). */
+  async function authorised(schoolId: string, recordingId: string): Promise<RecordingView> {
+    const row = await findRecordingView(db, schoolId, recordingId);
+    if (!row) throw new NotFoundError('The recording of this lesson');
+    return row;
+  }
+
   return {
     async playback(actor: Actor, recordingId: string): Promise<PlaybackDto> {
-      const row = requireReady(await loadViewable(db, actor, recordingId));
-      const duration = durationOf(row);
-      const src = await urls.playback(row.renditionKey, duration);
-      const poster = row.posterKey ? await urls.playback(row.posterKey, duration) : null;
-      const captions = await listCaptions(db, row.id);
-      return {
-        recordingId: row.id,
-        src: { url: src.url, type: 'video/mp4' },
-        posterUrl: poster?.url ?? null,
-        expiresAt: src.expiresAt,
-        durationSeconds: duration,
-        width: row.width ?? 0,
-        height: row.height ?? 0,
-        thumbnailsUrl: parseThumbnailGrid(row.thumbnails) ? thumbnailsPath(row.id) : null,
-        captions: captions.map(presentCaption),
-      };
+      return playbackOf(await loadViewable(db, actor, recordingId));
+    },
+
+    /**
+     * Playback of a recording the caller reaches through a lesson: the lessons policy decided, so the
+     * recordings policy (teachers and admins only) is not applied again. Always within one school.
+     */
+    async playbackAuthorised(schoolId: string, recordingId: string): Promise<PlaybackDto> {
+      return playbackOf(await authorised(schoolId, recordingId));
     },
 
     /** A presigned URL of the original under its own file name, for a 302. */
@@ -77,12 +105,12 @@ export function createRecordingMediaService({ db, storage, urls }: Deps) {
 
     /** The WebVTT thumbnails track, with sheet URLs signed to last as long as a playback URL. */
     async thumbnailsVtt(actor: Actor, recordingId: string): Promise<string> {
-      const row = requireReady(await loadViewable(db, actor, recordingId));
-      const grid = parseThumbnailGrid(row.thumbnails);
-      if (!grid) throw new NotFoundError('The thumbnail track of this recording');
-      const duration = durationOf(row);
-      const sheetUrls = await Promise.all(grid.sheets.map(async (sheet) => (await urls.playback(sheet.key, duration)).url));
-      return buildThumbnailsVtt(grid, duration, sheetUrls);
+      return thumbnailsVttOf(await loadViewable(db, actor, recordingId));
+    },
+
+    /** The thumbnails track of a recording reached through a lesson (see playbackAuthorised). */
+    async thumbnailsVttAuthorised(schoolId: string, recordingId: string): Promise<string> {
+      return thumbnailsVttOf(await authorised(schoolId, recordingId));
     },
   };
 }

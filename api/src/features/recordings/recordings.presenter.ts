@@ -1,6 +1,6 @@
 import type { CaptionDto, FailureCode, RecordingDto } from '@core/contracts';
 import type { Actor } from '../../auth/actor';
-import type { RecordingView } from './recordings.read-model';
+import type { LessonUse, RecordingView } from './recordings.read-model';
 import type { CaptionRow } from './captions.repository';
 import { canEditRecording } from './recordings.policy';
 import { isRetryable } from './retry-rule';
@@ -11,8 +11,11 @@ const FALLBACK_FAILURE_MESSAGE = 'Processing failed for a reason that was not re
 export const captionFilePath = (recordingId: string, captionId: string) => `/api/recordings/${recordingId}/captions/${captionId}.vtt`;
 export const thumbnailsPath = (recordingId: string) => `/api/recordings/${recordingId}/thumbnails.vtt`;
 
-/** A recording as the library shows it, with what the caller may do to it. */
-export function presentRecording(row: RecordingView, actor: Actor, posterUrl: string | null): RecordingDto {
+/**
+ * A recording as the library shows it, with what the caller may do to it and the lessons built on
+ * it (none for an upload that just finished: no lesson can use a recording before it is ready).
+ */
+export function presentRecording(row: RecordingView, actor: Actor, posterUrl: string | null, usedBy: LessonUse[] = []): RecordingDto {
   const failed = row.state === 'failed' && row.failureCode !== null;
   return {
     id: row.id,
@@ -41,6 +44,7 @@ export function presentRecording(row: RecordingView, actor: Actor, posterUrl: st
     canEdit: canEditRecording(actor, row),
     // Only the owner can continue an upload, so only they are told its id.
     uploadId: row.state === 'uploading' && row.ownerId === actor.userId ? row.openUploadId : null,
+    usedBy: usedBy.map((use) => ({ id: use.id, title: use.title, state: use.state })),
     createdAt: new Date(row.createdAt).toISOString(),
     updatedAt: new Date(row.updatedAt).toISOString(),
   };

@@ -1,5 +1,6 @@
 import type { Db } from '../../db/knex';
-import type { RecordingListQuery, RecordingState } from '@core/contracts';
+import type { LessonState, RecordingListQuery, RecordingState } from '@core/contracts';
+import { lessonStateOf } from '../lessons/lesson-state';
 
 /** A recording row with what the library shows beside it: the owner's name and the open upload. */
 export interface RecordingView {
@@ -110,4 +111,35 @@ export async function listRecordingViews(db: Db, schoolId: string, userId: strin
       rows.orderBy([{ column: 'r.created_at', order: 'desc' }]);
   }
   return rows.orderBy('r.id');
+}
+
+/** A lesson built on a recording, as the library names it. */
+export interface LessonUse {
+  id: string;
+  title: string;
+  state: LessonState;
+}
+
+/**
+ * The school's lessons built on each of these recordings (any owner: a recording cannot be deleted
+ * while one remains, so the library names them all), by title, keyed by recording id.
+ */
+export async function listLessonUses(db: Db, schoolId: string, recordingIds: string[]): Promise<Map<string, LessonUse[]>> {
+  const uses = new Map<string, LessonUse[]>();
+  if (recordingIds.length === 0) return uses;
+  const rows = await db('lessons')
+    .where('school_id', schoolId)
+    .whereIn('recording_id', recordingIds)
+    .orderByRaw('lower(title) ASC, id ASC')
+    .select<{ id: string; recordingId: string; title: string; archivedAt: Date | null; latestVersion: number | null }[]>(
+      'id',
+      'recording_id as recordingId',
+      'title',
+      'archived_at as archivedAt',
+      'latest_version as latestVersion',
+    );
+  for (const row of rows) {
+    uses.set(row.recordingId, [...(uses.get(row.recordingId) ?? []), { id: row.id, title: row.title, state: lessonStateOf(row) }]);
+  }
+  return uses;
 }

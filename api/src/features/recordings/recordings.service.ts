@@ -17,6 +17,20 @@ import { createMediaUrls, type MediaUrls } from './media-urls';
 import { createRecordingMediaService } from './recording-media.service';
 import { createCaptionsService } from './captions.service';
 
+/** How many lessons a refusal names before it says "and N more". */
+const NAMED_USES = 3;
+
+/** Why a recording cannot be deleted, naming the lessons built on it and what to do instead. */
+export function inUseSentence(uses: read.LessonUse[]): string {
+  // A published version keeps its recording for good (its students' answers refer to the video).
+  const keeps = 'a lesson that was ever published keeps its recording: archive it to hide it instead.';
+  const quoted = uses.slice(0, NAMED_USES).map((use) => `“${use.title}”`);
+  if (uses.length === 1) return `The lesson ${quoted[0]} uses this recording, so it cannot be deleted. Delete that lesson first; ${keeps}`;
+  const rest = uses.length - quoted.length;
+  const names = rest > 0 ? `${quoted.join(', ')} and ${rest} more` : `${quoted.slice(0, -1).join(', ')} and ${quoted.at(-1)}`;
+  return `${uses.length} lessons use this recording (${names}), so it cannot be deleted. Delete those lessons first; ${keeps}`;
+}
+
 interface Deps {
   db: Knex;
   storage: ObjectStorage;
@@ -26,8 +40,9 @@ interface Deps {
 
 /** The library: list, detail, rename, delete and retry of a school's recordings. */
 export function createRecordingsService({ db, storage, jobs, urls }: Deps) {
-  async function present(actor: Actor, row: read.RecordingView): Promise<RecordingDto> {
-    return presentRecording(row, actor, await urls.poster(row.posterKey));
+  async function present(actor: Actor, row: read.RecordingView, usedBy?: read.LessonUse[]): Promise<RecordingDto> {
+    const uses = usedBy ?? (await read.listLessonUses(db, row.schoolId, [row.id])).get(row.id) ?? [];
+    return presentRecording(row, actor, await urls.poster(row.posterKey), uses);
   }
 
   async function reload(actor: Actor, recordingId: string): Promise<RecordingDto> {
@@ -44,8 +59,16 @@ export function createRecordingsService({ db, storage, jobs, urls }: Deps) {
 
   return {
     async list(actor: Actor, query: RecordingListQuery): Promise<RecordingDto[]> {
-      const rows = await read.listRecordingViews(db, actor.active.schoolId, actor.userId, query);
-      return Promise.all(rows.filter((row) => canViewRecording(actor, row)).map((row) => present(actor, row)));
+      const rows = (await read.listRecordingViews(db, actor.active.schoolId, actor.userId, query)).filter((row) =>
+        canViewRecording(actor, row),
+      );
+      // One query for the whole page's lessons, not one per recording.
+      const uses = await read.listLessonUses(
+        db,
+        actor.active.schoolId,
+        rows.map((row) => row.id),
+      );
+      return Promise.all(rows.map((row) => present(actor, row, uses.get(row.id) ?? [])));
     },
 
     async detail(actor: Actor, recordingId: string): Promise<RecordingDetailDto> {
@@ -71,6 +94,9 @@ export function createRecordingsService({ db, storage, jobs, urls }: Deps) {
       await db.transaction(async (trx) => {
         const locked = await repo.lockRecording(trx, row.schoolId, row.id);
         if (!locked) throw new NotFoundError('That recording');
+        // Checked under the lock, before storage is touched (the foreign key would refuse too, but too late).
+        const uses = (await read.listLessonUses(trx, row.schoolId, [row.id])).get(row.id) ?? [];
+        if (uses.length > 0) throw new ConflictError('recording_in_use', inUseSentence(uses));
         if (locked.state === 'uploading') {
           const upload = await repo.findOpenUpload(trx, row.schoolId, row.id);
           if (upload) {

@@ -28,6 +28,7 @@ export function buildRecording(overrides: Partial<RecordingDto> = {}): Recording
     owner: { id: nextId(), name: 'Ada Quill' },
     canEdit: true,
     uploadId: null,
+    usedBy: [],
     createdAt: '2025-03-03T09:00:00.000Z',
     updatedAt: '2025-03-03T09:05:00.000Z',
     ...overrides,

@@ -12,6 +12,15 @@ const SECTIONS: Partial<Record<Role, TabLink[]>> = {
   teacher: [
     { to: paths.teacher.home, label: 'Classes', end: true },
     { to: paths.teacher.recordings, label: 'Recordings', end: false },
+    { to: paths.lessons.list(paths.teacher.home), label: 'Lessons', end: false },
+  ],
+  coordinator: [
+    { to: paths.coordinator.home, label: 'Department', end: true },
+    { to: paths.lessons.list(paths.coordinator.home), label: 'Lessons', end: false },
+  ],
+  substitute: [
+    { to: paths.substitute.home, label: 'Cover', end: true },
+    { to: paths.lessons.list(paths.substitute.home), label: 'Shared lessons', end: false },
   ],
 };
 

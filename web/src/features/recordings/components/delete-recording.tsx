@@ -1,8 +1,11 @@
 import { useState } from 'react';
 import type { RecordingDto } from '@core/contracts';
+import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
+import { isApiError } from '@/lib/api-client';
 import { useDeleteRecording } from '../api/delete-recording';
 import { ConfirmDialog } from './confirm-dialog';
+import { RecordingUsedBy } from './recording-used-by';
 
 type DeleteRecordingProps = { recording: RecordingDto; onDeleted?: () => void; size?: 'sm' | 'md' };
 
@@ -11,6 +14,8 @@ export function DeleteRecording({ recording, onDeleted, size = 'sm' }: DeleteRec
   const [confirming, setConfirming] = useState(false);
   const mutation = useDeleteRecording();
   if (!recording.canEdit) return null;
+  // The server refuses while lessons are built on the recording; its sentence names them.
+  const inUse = mutation.isError && isApiError(mutation.error) && mutation.error.code === 'recording_in_use' ? mutation.error : null;
   return (
     <>
       <Button size={size} variant="danger" onClick={() => setConfirming(true)} aria-label={`Delete ${recording.title}`}>
@@ -22,7 +27,7 @@ export function DeleteRecording({ recording, onDeleted, size = 'sm' }: DeleteRec
         confirmLabel="Delete the recording"
         cancelLabel="Keep it"
         busy={mutation.isPending}
-        error={mutation.isError ? mutation.error.message : undefined}
+        error={mutation.isError && !inUse ? mutation.error.message : undefined}
         onConfirm={() =>
           mutation.mutate(recording.id, {
             onSuccess: () => {
@@ -36,7 +41,17 @@ export function DeleteRecording({ recording, onDeleted, size = 'sm' }: DeleteRec
           setConfirming(false);
         }}
       >
-        The original file, the web version, the poster, the thumbnails and the captions are all deleted. This cannot be undone.
+        {inUse ? (
+          <Banner tone="error" title="The recording was not deleted">
+            <p>{inUse.message}</p>
+            <RecordingUsedBy recording={recording} className="mt-1" />
+          </Banner>
+        ) : (
+          <>
+            The original file, the web version, the poster, the thumbnails and the captions are all deleted. This cannot be undone.
+            {recording.usedBy.length > 0 ? <RecordingUsedBy recording={recording} className="mt-2 text-ink" /> : null}
+          </>
+        )}
       </ConfirmDialog>
     </>
   );

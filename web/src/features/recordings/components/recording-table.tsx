@@ -8,6 +8,7 @@ import { DeleteRecording } from './delete-recording';
 import { RecordingPoster } from './recording-poster';
 import { RecordingState } from './recording-state';
 import { RecordingTitle } from './recording-title';
+import { RecordingUsedBy } from './recording-used-by';
 
 type TableContext = {
   clock: SchoolClock;
@@ -48,6 +49,7 @@ const COLUMNS: ColumnDef<RecordingDto, unknown>[] = [
           {row.original.originalFileName !== row.original.title ? (
             <div className="text-sm break-all text-ink-muted">{row.original.originalFileName}</div>
           ) : null}
+          <RecordingUsedBy recording={row.original} className="mt-1" />
         </div>
       </div>
     ),

@@ -1,0 +1,16 @@
+import { lessonUrl } from './keys';
+
+const versionQuery = (version?: number) => (version === undefined ? '' : `?version=${version}`);
+
+/**
+ * Download links (plain navigations: the API answers with an attachment). Without a version they carry the
+ * draft; with one, that published version.
+ */
+export const lessonDownloads = {
+  /** The lesson file (`<title>.pinfield-lesson.json`). */
+  file: (lessonId: string, version?: number) => lessonUrl(lessonId, `/export${versionQuery(version)}`),
+  /** WebVTT chapters track. */
+  chapters: (lessonId: string, version?: number) => lessonUrl(lessonId, `/chapters.vtt${versionQuery(version)}`),
+  /** WebVTT metadata track with one cue per checkpoint. */
+  checkpoints: (lessonId: string, version?: number) => lessonUrl(lessonId, `/checkpoints.vtt${versionQuery(version)}`),
+};

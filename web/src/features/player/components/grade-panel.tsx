@@ -1,0 +1,69 @@
+import type { CheckpointGradeDto } from '@core/contracts';
+import { RichText } from '@/components/rich-text/rich-text';
+import { AlertIcon, CheckIcon, InfoIcon } from '@/components/ui/icons';
+import { cn } from '@/lib/cn';
+
+type GradePanelProps = {
+  grade: CheckpointGradeDto;
+  /** A prediction keeps its reveal for the reveal time; every other kind shows it when the server sends it. */
+  showReveal: boolean;
+};
+
+const VERDICTS = {
+  right: { Icon: CheckIcon, words: 'Right', tone: 'border-success bg-success-soft', icon: 'text-success' },
+  wrong: { Icon: AlertIcon, words: 'Not right yet', tone: 'border-danger bg-danger-soft', icon: 'text-danger' },
+  saved: { Icon: InfoIcon, words: 'Saved', tone: 'border-teal bg-teal-soft', icon: 'text-teal' },
+} as const;
+
+function attemptsText(left: number): string {
+  if (left <= 0) return 'No attempts left.';
+  return left === 1 ? '1 attempt left.' : `${left} attempts left.`;
+}
+
+/** What the server's grade said, in words and an icon (never colour alone). */
+export function GradePanel({ grade, showReveal }: GradePanelProps) {
+  const verdict = VERDICTS[grade.correct === true ? 'right' : grade.correct === false ? 'wrong' : 'saved'];
+  const { Icon } = verdict;
+  return (
+    <section aria-label="Result" className={cn('flex flex-col gap-3 rounded-md border-l-4 px-4 py-3', verdict.tone)} data-verdict={grade.correct === null ? 'saved' : String(grade.correct)}>
+      <p className="flex items-center gap-2 text-lg font-bold" role="status">
+        <Icon className={cn('size-6 shrink-0', verdict.icon)} />
+        {verdict.words}
+      </p>
+      {grade.feedback.trim() ? <RichText markdown={grade.feedback} /> : null}
+      {grade.hints.length > 0 ? (
+        <div>
+          <p className="font-bold">{grade.hints.length === 1 ? 'Hint' : 'Hints'}</p>
+          <ol className="list-decimal pl-6">
+            {grade.hints.map((hint, index) => (
+              <li key={index}>
+                <RichText markdown={hint} />
+              </li>
+            ))}
+          </ol>
+        </div>
+      ) : null}
+      {grade.correct === false ? <p className="text-sm">{attemptsText(grade.attemptsLeft)}</p> : null}
+      {showReveal && grade.reveal ? <RevealText answer={grade.reveal.answer} explanation={grade.reveal.explanation} /> : null}
+    </section>
+  );
+}
+
+export function RevealText({ answer, explanation }: { answer: string; explanation: string }) {
+  return (
+    <div className="flex flex-col gap-2 rounded-md border border-line bg-surface px-3 py-2">
+      {answer.trim() ? (
+        <div>
+          <p className="font-bold">The answer</p>
+          <RichText markdown={answer} />
+        </div>
+      ) : null}
+      {explanation.trim() ? (
+        <div>
+          <p className="font-bold">Why</p>
+          <RichText markdown={explanation} />
+        </div>
+      ) : null}
+    </div>
+  );
+}
