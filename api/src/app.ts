@@ -51,6 +51,8 @@ export interface AppDeps {
   demoAccounts: { email: string; name: string; label: string }[];
 }
 
+const LESSON_BODY_LIMIT = '4mb';
+
 function trustProxy(value: string): boolean | number | string {
   if (value === 'true' || value === 'false') return value === 'true';
   return /^\d+$/.test(value) ? Number(value) : value;
@@ -109,6 +111,8 @@ export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAc
     await db.raw('SELECT 1');
     res.json({ ok: true });
   });
+  // A whole lesson draft or lesson file may pass the general limit (LIMITS.lessonFileBytesMax and up to 200 checkpoints).
+  api.use(['/lessons/import', '/lessons/:lessonId/draft'], express.json({ limit: LESSON_BODY_LIMIT }));
   api.use(express.json({ limit: env.BODY_LIMIT }));
   api.use(createSessionMiddleware({ pool, secret: env.SESSION_SECRET, secure: env.PUBLIC_URL.startsWith('https://') }));
   api.use(passport.initialize());
@@ -122,19 +126,11 @@ export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAc
   api.use(departmentsRoutes(departments));
   api.use(schoolsRoutes(db));
   api.use(uploadsRoutes(createUploadsService({ db, storage, jobs, env })));
-  // recordings: uploads and library routes are mounted here (storage, jobs)
   api.use(recordingsRoutes(createRecordingsServices({ db, storage, jobs, playbackMinutes: env.PLAYBACK_URL_MINUTES })));
-  api.use(lessonsRoutes(createLessonsServices({ db, storage, playbackMinutes: env.PLAYBACK_URL_MINUTES })));
-  // B2: preview as student, lesson files, WebVTT tracks and lesson images.
+  const lessons = createLessonsServices({ db, storage, playbackMinutes: env.PLAYBACK_URL_MINUTES });
+  api.use(lessonsRoutes(lessons));
   api.use(lessonPreviewRoutes(createLessonPreviewService({ db })));
-  api.use(
-    lessonTransferRoutes(
-      createLessonTransferService({
-        db,
-        lessons: createLessonsServices({ db, storage, playbackMinutes: env.PLAYBACK_URL_MINUTES }).lessons,
-      }),
-    ),
-  );
+  api.use(lessonTransferRoutes(createLessonTransferService({ db, lessons: lessons.lessons })));
   api.use(lessonVttRoutes({ db }));
   api.use(lessonImagesRoutes(createLessonImagesService({ db, storage })));
   api.use(apiNotFound);

@@ -2,6 +2,7 @@ import type { Knex } from 'knex';
 import { createKnex } from '../db/knex';
 import { seedPeopleAndClasses } from './steps/001-people-and-classes';
 import { seedDemoRecordings } from './steps/002-demo-recordings';
+import { seedDemoLessons } from './steps/003-demo-lessons';
 
 /** The app's settings as variables (storage address, bucket …), as the app itself would read them. */
 export type SeedSettings = Record<string, string | undefined>;
@@ -15,6 +16,7 @@ export interface SeedStep {
 export const SEED_STEPS: SeedStep[] = [
   { name: '001-people-and-classes', run: seedPeopleAndClasses },
   { name: '002-demo-recordings', run: seedDemoRecordings },
+  { name: '003-demo-lessons', run: seedDemoLessons },
 ];
 
 // Any fixed number: two starts at once must not seed twice.

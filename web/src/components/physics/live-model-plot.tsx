@@ -8,6 +8,13 @@ type LiveModelPlotProps = { model: LiveModel; values: Readonly<Record<string, nu
 
 const axisTitle = (label: string, unit: string) => (unit ? `${label} (${unit})` : label);
 
+/** A LaTeX symbol as plain text for a canvas label: \\theta → θ, B_H → BH. */
+const plainSymbol = (latex: string) =>
+  latex
+    .replace(/\\theta/g, 'θ')
+    .replace(/\\varphi/g, 'φ')
+    .replace(/[_{}\\]/g, '');
+
 /** Reads a CSS colour token so the plot uses the app's palette. */
 function token(name: string, fallback: string): string {
   const value = getComputedStyle(document.documentElement).getPropertyValue(name).trim();
@@ -86,7 +93,8 @@ export function LiveModelPlot({ model, values }: LiveModelPlotProps) {
   const markerAt = input ? (values[input.name] ?? null) : null;
 
   const xTitle = input ? axisTitle(input.label, input.unit) : '';
-  const yTitle = axisTitle(definition.output.label, definition.output.unit);
+  // The vertical axis is short: the symbol and unit there, the words in the caption.
+  const yTitle = axisTitle(plainSymbol(definition.output.symbol), definition.output.unit);
 
   useEffect(() => {
     const element = holder.current;

@@ -38,7 +38,8 @@ export type LessonPlayerProps = {
  * The student player: the video with every checkpoint kind on its pins. It stops exactly at each
  * pause or gate pin, shows asides beside the playing video, keeps an unanswered gate from being
  * passed, shows a prediction's reveal later, and shows only what the server's grade replies say.
- * The root's data-stop-ms is the pin time of the open panel, data-current-ms the video's time.
+ * The root's data-ready turns "true" once pins are watched, data-stop-ms is the pin time of the open
+ * panel, data-current-ms the video's time (from its events).
  */
 export function LessonPlayer({ view, playback, onAnswer, mode, onEvent, onRefresh, onPlayer, safetyAcknowledged, initialBook, className }: LessonPlayerProps) {
   const lesson = useLessonPlayer({ view, onAnswer, onEvent, safetyAcknowledged, initialBook });
@@ -69,6 +70,7 @@ export function LessonPlayer({ view, playback, onAnswer, mode, onEvent, onRefres
     <div
       className={cn('flex flex-col gap-4', className)}
       data-lesson-player={mode}
+      data-ready={lesson.scheduler ? 'true' : 'false'}
       data-stop-ms={overlay ? overlay.stop.atMs : undefined}
       data-stop-id={overlay ? overlay.stop.id : undefined}
       data-current-ms={Math.round(currentMs)}

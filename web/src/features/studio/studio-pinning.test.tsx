@@ -19,10 +19,12 @@ describe('studio: pinning', { timeout: 20_000 }, () => {
     await user.keyboard('p2');
     expect(screen.getByRole('button', { name: 'Numeric answer, at 0:20.000' })).toBeInTheDocument();
 
-    await waitFor(() => expect(saves.at(-1)?.content.checkpoints.map((c) => [c.kind, c.atMs])).toEqual([
-      ['multiple-choice', 12_320],
-      ['numeric', 20_000],
-    ]));
+    await waitFor(() =>
+      expect(saves.at(-1)?.content.checkpoints.map((c) => [c.kind, c.atMs])).toEqual([
+        ['multiple-choice', 12_320],
+        ['numeric', 20_000],
+      ]),
+    );
     expect(saves[0]!.revision).toBe(3);
   });
 
@@ -46,7 +48,9 @@ describe('studio: pinning', { timeout: 20_000 }, () => {
   });
 
   it('refuses a pin past the end of the recording', async () => {
-    const lesson = buildStudioLesson(buildContent(), { recording: { id: 'r', title: 'Short (test)', durationMs: 5000, frameRate: 25, ready: true } });
+    const lesson = buildStudioLesson(buildContent(), {
+      recording: { id: 'r', title: 'Short (test)', durationMs: 5000, frameRate: 25, ready: true },
+    });
     mockDraftSaves(lesson);
     const { user } = renderStudio(lesson, { player: fakePlayer(7) });
     await screen.findByRole('button', { name: /Pin at/ });

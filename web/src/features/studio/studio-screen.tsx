@@ -175,7 +175,9 @@ export function StudioScreen(props: StudioScreenProps) {
             <LiveRegion className="min-w-0 flex-1">
               {pinPrefix ? <p className="text-sm font-bold">Pin: press 1 to 7 for the kind (? lists them).</p> : null}
               {notice && !pinPrefix ? (
-                <p className={`flex flex-wrap items-center gap-2 text-sm ${notice.tone === 'error' ? 'font-bold text-danger' : 'text-ink'}`}>
+                <p
+                  className={`flex flex-wrap items-center gap-2 text-sm ${notice.tone === 'error' ? 'font-bold text-danger' : 'text-ink'}`}
+                >
                   {notice.text}
                   {notice.action ? (
                     <Button size="sm" variant="secondary" onClick={notice.action.run}>
@@ -255,7 +257,10 @@ export function StudioScreen(props: StudioScreenProps) {
         onPublished={(version) => {
           setPublishedVersion(version.number);
           setPublishOpen(false);
-          setNotice({ tone: 'info', text: `Published version ${version.number}. Students assigned the lesson from now on get this version.` });
+          setNotice({
+            tone: 'info',
+            text: `Published version ${version.number}. Students assigned the lesson from now on get this version.`,
+          });
         }}
         onSelect={setSelection}
       />

@@ -13,7 +13,14 @@ export const CLOCK = { timeZone: 'UTC', locale: 'en-GB' };
 
 export function buildContent(overrides: Partial<LessonContent> = {}): LessonContent {
   return {
-    settings: { title: 'Coil on its axis (test)', description: '', tags: ['magnetism'], level: 'Year 11', safetyNotes: '', minSpacingMs: 500 },
+    settings: {
+      title: 'Coil on its axis (test)',
+      description: '',
+      tags: ['magnetism'],
+      level: 'Year 11',
+      safetyNotes: '',
+      minSpacingMs: 500,
+    },
     chapters: [],
     checkpoints: [],
     ...overrides,
@@ -125,13 +132,21 @@ export function mockDraftSaves(lesson: LessonDto, problemsFor: (content: LessonC
       const body = (await request.json()) as DraftSave;
       saves.push(body);
       revision += 1;
-      return HttpResponse.json<DraftSavedDto>({ revision, savedAt: '2026-01-05T14:02:00.000Z', problems: problemsFor(body.content), unpublishedChanges: true });
+      return HttpResponse.json<DraftSavedDto>({
+        revision,
+        savedAt: '2026-01-05T14:02:00.000Z',
+        problems: problemsFor(body.content),
+        unpublishedChanges: true,
+      });
     }),
   );
   return saves;
 }
 
-export function renderStudio(lesson: LessonDto, options: { player?: ReturnType<typeof fakePlayer>; playback?: PlaybackDto; problemPath?: string } = {}) {
+export function renderStudio(
+  lesson: LessonDto,
+  options: { player?: ReturnType<typeof fakePlayer>; playback?: PlaybackDto; problemPath?: string } = {},
+) {
   const player = options.player ?? fakePlayer();
   const playback = options.playback ?? buildStudioPlayback(lesson);
   const result = renderWithProviders(

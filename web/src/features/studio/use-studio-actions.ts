@@ -71,7 +71,10 @@ export function useStudioActions(input: ActionsInput) {
       setNotice({ tone: 'info', text: 'Select a checkpoint first (click its marker, or Tab to the markers and press Enter).' });
       return;
     }
-    const target = seconds !== 0 ? stepTime(selected.atMs, seconds * 1000, frameRate, durationMs) : stepFrames(selected.atMs, frames, frameRate, durationMs);
+    const target =
+      seconds !== 0
+        ? stepTime(selected.atMs, seconds * 1000, frameRate, durationMs)
+        : stepFrames(selected.atMs, frames, frameRate, durationMs);
     if (target === selected.atMs) return;
     // Nudges of the same checkpoint in a row undo as one step.
     const refusal = moveTo(selected.key, target, `nudge:${selected.key}`);
@@ -83,7 +86,11 @@ export function useStudioActions(input: ActionsInput) {
     if (!target) return;
     change((c) => removeCheckpoint(c, key));
     setSelection(null);
-    setNotice({ tone: 'info', text: `Deleted “${checkpointLabel(target)}” at ${formatTime(target.atMs)}.`, action: { label: 'Undo', run: draft.undo } });
+    setNotice({
+      tone: 'info',
+      text: `Deleted “${checkpointLabel(target)}” at ${formatTime(target.atMs)}.`,
+      action: { label: 'Undo', run: draft.undo },
+    });
   };
 
   const duplicate = (key: string) => {
@@ -110,7 +117,10 @@ export function useStudioActions(input: ActionsInput) {
       });
       return;
     }
-    const nextStart = content.chapters.map((c) => c.startMs).filter((s) => s > start).sort((a, b) => a - b)[0];
+    const nextStart = content.chapters
+      .map((c) => c.startMs)
+      .filter((s) => s > start)
+      .sort((a, b) => a - b)[0];
     const end = range ? range.endMs : Math.min(durationMs, nextStart ?? durationMs, start + 60_000);
     if (end <= start) {
       setNotice({ tone: 'error', text: 'No room for a chapter here: the recording ends or the next chapter starts at this moment.' });
@@ -120,7 +130,10 @@ export function useStudioActions(input: ActionsInput) {
     change((c) => addChapter(c, chapter));
     setRange(null);
     setSelection({ type: 'chapter', key: chapter.key });
-    setNotice({ tone: 'info', text: `Added a chapter from ${formatTime(start)} to ${formatTime(end)}: give it a title in the side panel.` });
+    setNotice({
+      tone: 'info',
+      text: `Added a chapter from ${formatTime(start)} to ${formatTime(end)}: give it a title in the side panel.`,
+    });
   };
 
   const stepPlayhead = useCallback(

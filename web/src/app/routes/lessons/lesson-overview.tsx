@@ -89,7 +89,10 @@ export default function LessonOverviewRoute() {
                   WebVTT tracks
                 </h2>
                 <p className="mb-2 text-sm text-ink-muted">
-                  The chapters and checkpoint times of the draft, for other players and editors.
+                  {lesson.canEdit
+                    ? 'The chapters and checkpoint times of the draft'
+                    : 'The chapters and checkpoint times of the newest published version'}
+                  , for other players and editors.
                 </p>
                 <p className="flex flex-wrap gap-x-4">
                   <a href={lessonDownloads.chapters(lesson.id)} className="font-bold text-copper underline" download>

@@ -45,7 +45,10 @@ export default function LessonStudioRoute() {
   if (!data.recording.ready) {
     return (
       <Banner tone="error" title="The recording of this lesson is not ready">
-        <p>“{data.recording.title}” cannot be played at the moment (it may be reprocessing or its files were removed). Check it in the recordings library.</p>
+        <p>
+          “{data.recording.title}” cannot be played at the moment (it may be reprocessing or its files were removed). Check it in the
+          recordings library.
+        </p>
       </Banner>
     );
   }

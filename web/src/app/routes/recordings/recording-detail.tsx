@@ -11,6 +11,8 @@ import { recordingDownloadUrl, useRecording } from '@/features/recordings/api/ge
 import { CaptionForm } from '@/features/recordings/components/caption-form';
 import { CaptionList } from '@/features/recordings/components/caption-list';
 import { DeleteRecording } from '@/features/recordings/components/delete-recording';
+import { MakeLessonLink } from '@/features/recordings/components/make-lesson-link';
+import { RecordingUsedBy } from '@/features/recordings/components/recording-used-by';
 import { RecordingFacts } from '@/features/recordings/components/recording-facts';
 import { RecordingPlayer } from '@/features/recordings/components/recording-player';
 import { RecordingPoster } from '@/features/recordings/components/recording-poster';
@@ -54,8 +56,10 @@ export default function RecordingDetailRoute() {
           <div className="mb-6 flex flex-wrap items-start justify-between gap-4">
             <div className="min-w-0">
               <RecordingTitle recording={recording} as="heading" />
+              <RecordingUsedBy recording={recording} className="mt-1" />
             </div>
             <div className="flex flex-wrap gap-2">
+              <MakeLessonLink recording={recording} />
               {hasOriginal(recording) ? (
                 <a href={recordingDownloadUrl(recording.id)} className={buttonVariants({ variant: 'secondary' })}>
                   Download original

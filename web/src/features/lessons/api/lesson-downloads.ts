@@ -3,8 +3,8 @@ import { lessonUrl } from './keys';
 const versionQuery = (version?: number) => (version === undefined ? '' : `?version=${version}`);
 
 /**
- * Download links (plain navigations: the API answers with an attachment). Without a version they carry the
- * draft; with one, that published version.
+ * Download links (plain navigations: the API answers with an attachment). Without a version the API sends the
+ * draft to the lesson's editors and the newest published version to everyone else; with one, that version.
  */
 export const lessonDownloads = {
   /** The lesson file (`<title>.pinfield-lesson.json`). */

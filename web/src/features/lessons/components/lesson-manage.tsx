@@ -3,8 +3,7 @@ import type { LessonDto } from '@core/contracts';
 import { Button } from '@/components/ui/button';
 import { FieldError } from '@/components/ui/field';
 import { LiveRegion } from '@/components/ui/live-region';
-// Generic; it belongs in components/ui (asked of the lead), until then shared from the recordings feature.
-import { ConfirmDialog } from '@/features/recordings/components/confirm-dialog';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { useDeleteLesson } from '../api/delete-lesson';
 import { useUpdateLesson } from '../api/update-lesson';
 

@@ -8,7 +8,7 @@ import { FieldError } from '@/components/ui/field';
 import { plural } from '@/lib/format';
 import { useDeleteCaption } from '../api/delete-caption';
 import { useUpdateCaption } from '../api/update-caption';
-import { ConfirmDialog } from './confirm-dialog';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 
 const column = createColumnHelper<CaptionDto>();
 

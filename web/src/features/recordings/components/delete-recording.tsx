@@ -4,7 +4,7 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { isApiError } from '@/lib/api-client';
 import { useDeleteRecording } from '../api/delete-recording';
-import { ConfirmDialog } from './confirm-dialog';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 import { RecordingUsedBy } from './recording-used-by';
 
 type DeleteRecordingProps = { recording: RecordingDto; onDeleted?: () => void; size?: 'sm' | 'md' };

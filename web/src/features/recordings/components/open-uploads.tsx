@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { FieldError } from '@/components/ui/field';
 import { formatDateTime, type SchoolClock } from '@/lib/format';
 import { useDiscardUpload } from '../api/discard-upload';
-import { ConfirmDialog } from './confirm-dialog';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 
 type OpenUploadsProps = {
   uploads: OpenUploadDto[];

@@ -7,7 +7,7 @@ import { paths } from '@/config/paths';
 import { cn } from '@/lib/cn';
 import { formatRate, formatTimeLeft, percentOf, secondsLeft } from '../upload/transfer-rate';
 import type { UploadRow as Row } from '../upload/upload-manager';
-import { ConfirmDialog } from './confirm-dialog';
+import { ConfirmDialog } from '@/components/ui/confirm-dialog';
 
 export type UploadRowActions = {
   pause: (id: string) => void;

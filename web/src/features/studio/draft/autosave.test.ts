@@ -20,8 +20,7 @@ function setup(check: (c: LessonContent) => { path: string; message: string }[] 
   const autosave = new Autosave({
     revision: 4,
     savedAt: '2026-01-05T14:00:00.000Z',
-    save: (revision, sent) =>
-      new Promise<DraftSavedDto>((resolve, reject) => calls.push({ revision, content: sent, resolve, reject })),
+    save: (revision, sent) => new Promise<DraftSavedDto>((resolve, reject) => calls.push({ revision, content: sent, resolve, reject })),
     check,
     onState: (state) => states.push(state),
     onSaved: (_dto, sent) => saved.push(sent),
@@ -139,11 +138,16 @@ describe('autosave', () => {
   });
 
   it('does not send content that breaks a hard limit, and saves once it is fixed', async () => {
-    const { autosave, calls, ok } = setup((c) => (c.settings.title === '' ? [{ path: 'settings.title', message: 'Give the lesson a title.' }] : []));
+    const { autosave, calls, ok } = setup((c) =>
+      c.settings.title === '' ? [{ path: 'settings.title', message: 'Give the lesson a title.' }] : [],
+    );
     autosave.edit(content(''));
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DEBOUNCE_MS);
     expect(calls).toHaveLength(0);
-    expect(autosave.current).toMatchObject({ kind: 'rejected', details: [{ path: 'settings.title', message: 'Give the lesson a title.' }] });
+    expect(autosave.current).toMatchObject({
+      kind: 'rejected',
+      details: [{ path: 'settings.title', message: 'Give the lesson a title.' }],
+    });
     expect(autosave.hasUnsaved).toBe(true);
     autosave.edit(content('Fixed'));
     await vi.advanceTimersByTimeAsync(AUTOSAVE_DEBOUNCE_MS);

@@ -20,7 +20,9 @@ export function moveCheckpoint(content: LessonContent, key: string, atMs: number
   const current = content.checkpoints.find((c) => c.key === key);
   if (!current || current.atMs === atMs) return content;
   const moved: Checkpoint =
-    current.kind === 'prediction' ? { ...current, atMs, revealAtMs: Math.max(atMs, current.revealAtMs + atMs - current.atMs) } : { ...current, atMs };
+    current.kind === 'prediction'
+      ? { ...current, atMs, revealAtMs: Math.max(atMs, current.revealAtMs + atMs - current.atMs) }
+      : { ...current, atMs };
   return replaceCheckpoint(content, moved);
 }
 

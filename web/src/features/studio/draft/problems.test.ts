@@ -41,7 +41,10 @@ describe('problems', () => {
     const content = lesson();
     const key = content.checkpoints[0]!.key;
     const a = groupProblems(content, [{ path: 'checkpoints.0.body', message: 'a' }]);
-    const b = groupProblems(content, [{ path: 'checkpoints.0.label', message: 'b' }, { path: 'settings.level', message: 'c' }]);
+    const b = groupProblems(content, [
+      { path: 'checkpoints.0.label', message: 'b' },
+      { path: 'settings.level', message: 'c' },
+    ]);
     const merged = mergeProblems(a, b);
     expect(merged.checkpoints.get(key)?.map((p) => p.message)).toEqual(['a', 'b']);
     expect(countProblems(merged)).toBe(3);

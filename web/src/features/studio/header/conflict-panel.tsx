@@ -24,7 +24,9 @@ export function ConflictPanel({ conflict, clock, onLoadNewer, onOverwrite }: Con
       <p>
         This lesson was saved {who} at {clockTime(conflict.savedAt, clock)}. Your latest edits are kept here.
       </p>
-      <p className="mt-1 text-sm">Load the newer version to continue from it (your unsaved edits here are dropped), or keep yours and save them over it.</p>
+      <p className="mt-1 text-sm">
+        Load the newer version to continue from it (your unsaved edits here are dropped), or keep yours and save them over it.
+      </p>
       <div className="mt-2 flex flex-wrap gap-2">
         <Button
           size="sm"

@@ -47,7 +47,8 @@ export function PublishDialog({ open, onClose, content, problems, nextVersion, p
       onPublished(version);
     } catch (error) {
       if (isApiError(error) && error.code === 'lesson_not_ready') setRefused(groupProblems(content, error.details));
-      else if (isApiError(error) && error.code === 'nothing_to_publish') setFailure('Nothing changed since the last version, so there is nothing new to publish.');
+      else if (isApiError(error) && error.code === 'nothing_to_publish')
+        setFailure('Nothing changed since the last version, so there is nothing new to publish.');
       else if (isApiError(error) && error.status === 409)
         setFailure('A newer draft was saved in another tab or by someone else: check it, then publish again.');
       else setFailure(error instanceof Error ? error.message : 'Publishing failed. Try again.');
@@ -81,8 +82,8 @@ export function PublishDialog({ open, onClose, content, problems, nextVersion, p
     >
       <div className="flex flex-col gap-4">
         <p className="text-ink-muted">
-          Students assigned this lesson later get version {nextVersion}; answers already given stay with the version they answered. The draft stays
-          open for more edits.
+          Students assigned this lesson later get version {nextVersion}; answers already given stay with the version they answered. The
+          draft stays open for more edits.
         </p>
         {blocked ? (
           <Banner tone="error" title={refused ? 'Not published: fix these first' : 'Fix these before publishing'}>

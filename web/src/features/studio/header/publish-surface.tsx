@@ -20,7 +20,9 @@ export function PublishSurface({ open, onClose, lessonId, draft, nextVersion, on
   async function publish(note: string) {
     const saved = await draft.autosave.flush();
     if (!saved) {
-      throw new Error('Your latest edits are not saved yet, so publishing waits. The saving state at the top says why; publish once they are saved.');
+      throw new Error(
+        'Your latest edits are not saved yet, so publishing waits. The saving state at the top says why; publish once they are saved.',
+      );
     }
     const version = await mutation.mutateAsync({ revision: draft.autosave.currentRevision, note });
     draft.markPublished();

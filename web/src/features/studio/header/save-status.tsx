@@ -36,8 +36,18 @@ export function SaveStatus({ state, clock, onRetry }: { state: SaveState; clock:
   const busy = state.kind === 'pending' || state.kind === 'saving';
   return (
     <div className="flex items-center gap-2">
-      <p role="status" className={`flex items-center gap-1.5 text-sm font-bold ${failed ? 'text-danger' : 'text-ink-muted'}`} title={state.kind === 'retrying' ? state.message : undefined}>
-        {failed ? <AlertIcon className="size-4" /> : busy ? <SpinnerIcon className="size-4 animate-spin" /> : <CheckIcon className="size-4 text-success" />}
+      <p
+        role="status"
+        className={`flex items-center gap-1.5 text-sm font-bold ${failed ? 'text-danger' : 'text-ink-muted'}`}
+        title={state.kind === 'retrying' ? state.message : undefined}
+      >
+        {failed ? (
+          <AlertIcon className="size-4" />
+        ) : busy ? (
+          <SpinnerIcon className="size-4 animate-spin" />
+        ) : (
+          <CheckIcon className="size-4 text-success" />
+        )}
         {saveStateText(state, clock)}
       </p>
       {state.kind === 'retrying' ? (

@@ -26,7 +26,9 @@ export function ChaptersEditor({ chapters, durationMs, selectedKey, problems, on
         Chapters
       </h2>
       {chapters.length === 0 ? (
-        <p className="text-sm text-ink-muted">No chapters. Drag across the chapter lane of the timeline to mark a range, or use “Add chapter here”.</p>
+        <p className="text-sm text-ink-muted">
+          No chapters. Drag across the chapter lane of the timeline to mark a range, or use “Add chapter here”.
+        </p>
       ) : null}
       <ol className="flex flex-col gap-2">
         {chapters.map((chapter, index) => {
@@ -70,11 +72,13 @@ export function ChaptersEditor({ chapters, durationMs, selectedKey, problems, on
                       }}
                     />
                   </div>
-                  {list?.filter((p) => !['title', 'startMs', 'endMs'].includes(p.path)).map((p) => (
-                    <p key={p.message} className="text-sm font-bold text-danger">
-                      {p.message}
-                    </p>
-                  ))}
+                  {list
+                    ?.filter((p) => !['title', 'startMs', 'endMs'].includes(p.path))
+                    .map((p) => (
+                      <p key={p.message} className="text-sm font-bold text-danger">
+                        {p.message}
+                      </p>
+                    ))}
                   <div>
                     <Button size="sm" variant="danger" onClick={() => onDelete(chapter.key)}>
                       Delete chapter
@@ -82,7 +86,11 @@ export function ChaptersEditor({ chapters, durationMs, selectedKey, problems, on
                   </div>
                 </div>
               ) : (
-                <button type="button" className="flex w-full cursor-pointer justify-between gap-2 text-left" onClick={() => onSelect(chapter.key)}>
+                <button
+                  type="button"
+                  className="flex w-full cursor-pointer justify-between gap-2 text-left"
+                  onClick={() => onSelect(chapter.key)}
+                >
                   <span className="font-bold">
                     {list && list.length > 0 ? '! ' : ''}
                     {name}

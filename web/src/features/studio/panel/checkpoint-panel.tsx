@@ -50,7 +50,13 @@ export function CheckpointPanel(props: CheckpointPanelProps) {
         </Button>
       </div>
       <div className="flex flex-wrap items-end gap-3">
-        <TimeField label="Time" hint="m:ss.mmm, moved to the nearest frame" valueMs={checkpoint.atMs} onCommit={props.onMoveTo} problem={messageAt(problems, 'atMs')} />
+        <TimeField
+          label="Time"
+          hint="m:ss.mmm, moved to the nearest frame"
+          valueMs={checkpoint.atMs}
+          onCommit={props.onMoveTo}
+          problem={messageAt(problems, 'atMs')}
+        />
         <div className="flex gap-2 pb-0.5">
           <Button size="sm" variant="secondary" onClick={props.onDuplicate}>
             <CopyIcon className="size-4" />

@@ -21,12 +21,22 @@ function entriesOf(content: LessonContent, problems: GroupedProblems): Entry[] {
   const entries: Entry[] = [];
   for (const p of problems.settings) {
     const head = p.path.split('.')[0] ?? '';
-    entries.push({ id: `s:${p.path}:${p.message}`, where: `Lesson settings · ${SETTING_NAMES[head] ?? head}`, message: p.message, target: null });
+    entries.push({
+      id: `s:${p.path}:${p.message}`,
+      where: `Lesson settings · ${SETTING_NAMES[head] ?? head}`,
+      message: p.message,
+      target: null,
+    });
   }
   content.chapters.forEach((chapter, index) => {
     for (const p of problems.chapters.get(chapter.key) ?? []) {
       const name = chapter.title.trim() || `Chapter ${index + 1}`;
-      entries.push({ id: `h:${chapter.key}:${p.path}:${p.message}`, where: `Chapter “${name}”`, message: p.message, target: { type: 'chapter', key: chapter.key } });
+      entries.push({
+        id: `h:${chapter.key}:${p.path}:${p.message}`,
+        where: `Chapter “${name}”`,
+        message: p.message,
+        target: { type: 'chapter', key: chapter.key },
+      });
     }
   });
   for (const checkpoint of content.checkpoints) {
@@ -44,7 +54,15 @@ function entriesOf(content: LessonContent, problems: GroupedProblems): Entry[] {
 }
 
 /** Everything to fix before publishing; each entry opens what it is about. */
-export function ProblemsList({ content, problems, onSelect }: { content: LessonContent; problems: GroupedProblems; onSelect: (target: Selection) => void }) {
+export function ProblemsList({
+  content,
+  problems,
+  onSelect,
+}: {
+  content: LessonContent;
+  problems: GroupedProblems;
+  onSelect: (target: Selection) => void;
+}) {
   const count = countProblems(problems);
   if (count === 0) return <p className="text-sm text-success">No problems: this draft is ready to publish.</p>;
   const entries = entriesOf(content, problems);
@@ -57,7 +75,11 @@ export function ProblemsList({ content, problems, onSelect }: { content: LessonC
       <ul className="mt-2 flex max-h-56 flex-col gap-1 overflow-y-auto">
         {entries.map((entry) => (
           <li key={entry.id}>
-            <button type="button" className="w-full cursor-pointer rounded-md px-2 py-1 text-left hover:bg-sunken" onClick={() => onSelect(entry.target)}>
+            <button
+              type="button"
+              className="w-full cursor-pointer rounded-md px-2 py-1 text-left hover:bg-sunken"
+              onClick={() => onSelect(entry.target)}
+            >
               <span className="block text-sm font-bold">{entry.where}</span>
               <span className="block text-sm text-ink-muted">{entry.message}</span>
             </button>

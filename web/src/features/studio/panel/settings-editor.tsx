@@ -38,7 +38,12 @@ export function SettingsEditor({ settings, problems, lessonId, onChange }: Setti
       </h2>
       <Field label="Title" error={messageAt(problems, 'title')}>
         {(control) => (
-          <Input {...control} value={settings.title} maxLength={LIMITS.lessonTitleMax} onChange={(event) => onChange({ title: event.target.value }, 'title')} />
+          <Input
+            {...control}
+            value={settings.title}
+            maxLength={LIMITS.lessonTitleMax}
+            onChange={(event) => onChange({ title: event.target.value }, 'title')}
+          />
         )}
       </Field>
       <Field label="Topic tags" hint="Type a tag and press Enter or a comma." error={messageAt(problems, 'tags')}>
@@ -46,7 +51,12 @@ export function SettingsEditor({ settings, problems, lessonId, onChange }: Setti
       </Field>
       <Field label="Level" hint="For example “Year 10” or “Introductory college”." error={messageAt(problems, 'level')}>
         {(control) => (
-          <Input {...control} value={settings.level} maxLength={LIMITS.lessonLevelMax} onChange={(event) => onChange({ level: event.target.value }, 'level')} />
+          <Input
+            {...control}
+            value={settings.level}
+            maxLength={LIMITS.lessonLevelMax}
+            onChange={(event) => onChange({ level: event.target.value }, 'level')}
+          />
         )}
       </Field>
       <MarkdownField

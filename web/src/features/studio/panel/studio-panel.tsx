@@ -29,7 +29,10 @@ export function StudioPanel(props: StudioPanelProps) {
   const { content, selection, problems, selected } = props;
   const chapterKey = selection?.type === 'chapter' ? selection.key : null;
   return (
-    <aside aria-label="Side panel" className="flex min-w-0 flex-col gap-5 rounded-lg border border-line bg-surface p-4 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)] lg:overflow-y-auto">
+    <aside
+      aria-label="Side panel"
+      className="flex min-w-0 flex-col gap-5 rounded-lg border border-line bg-surface p-4 lg:sticky lg:top-4 lg:max-h-[calc(100dvh-2rem)] lg:overflow-y-auto"
+    >
       <ProblemsList content={content} problems={problems} onSelect={props.onSelect} />
       {selected ? (
         <CheckpointPanel
@@ -48,7 +51,12 @@ export function StudioPanel(props: StudioPanelProps) {
       ) : (
         <>
           {chapterKey === null ? (
-            <SettingsEditor settings={content.settings} problems={problems.settings} lessonId={props.lessonId} onChange={props.onSettings} />
+            <SettingsEditor
+              settings={content.settings}
+              problems={problems.settings}
+              lessonId={props.lessonId}
+              onChange={props.onSettings}
+            />
           ) : null}
           <ChaptersEditor
             chapters={content.chapters}

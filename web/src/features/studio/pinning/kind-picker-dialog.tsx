@@ -4,7 +4,15 @@ import { formatTime } from '../time/format-time';
 import { StudioDialog } from '../ui/studio-dialog';
 
 /** "Pin here" from the transcript: which kind to pin at that line's start. */
-export function KindPickerDialog({ atMs, onPick, onClose }: { atMs: number | null; onPick: (kind: CheckpointKind) => void; onClose: () => void }) {
+export function KindPickerDialog({
+  atMs,
+  onPick,
+  onClose,
+}: {
+  atMs: number | null;
+  onPick: (kind: CheckpointKind) => void;
+  onClose: () => void;
+}) {
   return (
     <StudioDialog open={atMs !== null} title={`Pin at ${formatTime(atMs ?? 0)}`} onClose={onClose}>
       <p className="mb-3 text-ink-muted">Choose the kind of checkpoint.</p>

@@ -52,6 +52,7 @@ export function checkPlace(checkpoints: readonly Checkpoint[], atMs: number, rul
     return { ok: false, reason: 'past-end', nearestFreeMs: nearestFreeTime(checkpoints, rules.durationMs, rules, ignoreKey) };
   }
   const neighbour = collisionAt(checkpoints, snapped, rules.minSpacingMs, ignoreKey);
-  if (neighbour) return { ok: false, reason: 'too-close', neighbour, nearestFreeMs: nearestFreeTime(checkpoints, snapped, rules, ignoreKey) };
+  if (neighbour)
+    return { ok: false, reason: 'too-close', neighbour, nearestFreeMs: nearestFreeTime(checkpoints, snapped, rules, ignoreKey) };
   return { ok: true, atMs: snapped };
 }

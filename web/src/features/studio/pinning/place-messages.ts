@@ -5,7 +5,13 @@ import { formatTime } from '../time/format-time';
 import type { PlaceCheck } from './pin-rules';
 
 /** Why a pin or a move was refused, in one sentence that names the neighbour and the rule. */
-export function refusalText(check: Exclude<PlaceCheck, { ok: true }>, verb: 'pinned' | 'moved', atMs: number, durationMs: number, minSpacingMs: number): string {
+export function refusalText(
+  check: Exclude<PlaceCheck, { ok: true }>,
+  verb: 'pinned' | 'moved',
+  atMs: number,
+  durationMs: number,
+  minSpacingMs: number,
+): string {
   if (check.reason === 'past-end') {
     return `Not ${verb}: ${formatTime(atMs)} is past the end of the recording (${formatTime(durationMs)}).`;
   }

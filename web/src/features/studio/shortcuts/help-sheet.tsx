@@ -5,7 +5,9 @@ import { SHORTCUT_HELP } from './shortcuts';
 export function HelpSheet({ open, onClose }: { open: boolean; onClose: () => void }) {
   return (
     <StudioDialog open={open} title="Keyboard shortcuts" onClose={onClose} wide>
-      <p className="mb-3 text-ink-muted">Shortcuts work when the cursor is not in a text field. The video player has its own keys when it has focus.</p>
+      <p className="mb-3 text-ink-muted">
+        Shortcuts work when the cursor is not in a text field. The video player has its own keys when it has focus.
+      </p>
       <table className="w-full border-collapse text-left">
         <caption className="sr-only">Studio keyboard shortcuts</caption>
         <thead>
@@ -24,7 +26,9 @@ export function HelpSheet({ open, onClose }: { open: boolean; onClose: () => voi
               <td className="py-1.5 pr-4 whitespace-nowrap">
                 {row.keys.map((key, index) => (
                   <span key={`${key}-${index}`}>
-                    {index > 0 ? <span className="px-1 text-ink-muted">{row.keys.length === 2 && row.keys[0] === 'P' ? 'then' : '+'}</span> : null}
+                    {index > 0 ? (
+                      <span className="px-1 text-ink-muted">{row.keys.length === 2 && row.keys[0] === 'P' ? 'then' : '+'}</span>
+                    ) : null}
                     <kbd className="rounded border border-line-strong bg-sunken px-1.5 py-0.5 font-mono text-sm">{key}</kbd>
                   </span>
                 ))}

@@ -1,7 +1,15 @@
 import { describe, expect, it } from 'vitest';
 import { isTypingTarget, matchShortcut, type KeyLike } from './shortcuts';
 
-const key = (k: string, extra: Partial<KeyLike> = {}): KeyLike => ({ key: k, code: '', shiftKey: false, ctrlKey: false, metaKey: false, altKey: false, ...extra });
+const key = (k: string, extra: Partial<KeyLike> = {}): KeyLike => ({
+  key: k,
+  code: '',
+  shiftKey: false,
+  ctrlKey: false,
+  metaKey: false,
+  altKey: false,
+  ...extra,
+});
 
 describe('studio shortcuts', () => {
   it('pins a kind with P then a digit', () => {

@@ -18,7 +18,10 @@ export type KeyLike = Pick<KeyboardEvent, 'key' | 'code' | 'shiftKey' | 'ctrlKey
 
 /** Every shortcut, as the help sheet lists it (the matcher below is the one source of behaviour). */
 export const SHORTCUT_HELP: { keys: string[]; does: string }[] = [
-  ...CHECKPOINT_KINDS.map((kind, index) => ({ keys: ['P', String(index + 1)], does: `Pin a ${CHECKPOINT_KIND_LABELS[kind].toLowerCase()} at the current frame` })),
+  ...CHECKPOINT_KINDS.map((kind, index) => ({
+    keys: ['P', String(index + 1)],
+    does: `Pin a ${CHECKPOINT_KIND_LABELS[kind].toLowerCase()} at the current frame`,
+  })),
   { keys: [','], does: 'Move the selected checkpoint one frame earlier' },
   { keys: ['.'], does: 'Move the selected checkpoint one frame later' },
   { keys: ['Shift', ','], does: 'Move the selected checkpoint one second earlier' },

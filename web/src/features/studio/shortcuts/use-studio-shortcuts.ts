@@ -26,7 +26,7 @@ export function useStudioShortcuts(run: (action: StudioAction) => void, enabled 
       if (on) timer = setTimeout(() => arm(false), PIN_PREFIX_MS);
     };
     const onKeyDown = (event: KeyboardEvent) => {
-      if (event.defaultPrevented || event.repeat && event.key.toLowerCase() === 'p') return;
+      if (event.defaultPrevented || (event.repeat && event.key.toLowerCase() === 'p')) return;
       if (isTypingTarget(event.target)) return;
       if (document.querySelector('dialog[open]')) return;
       const action = matchShortcut(event, prefix.current);

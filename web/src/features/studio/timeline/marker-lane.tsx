@@ -160,7 +160,10 @@ export function MarkerLane({ checkpoints, scale, frameRate, selectedKey, problem
             >
               <KindIcon kind={checkpoint.kind} className="size-5" />
               {hasProblems ? (
-                <span aria-hidden="true" className="absolute -top-2 -right-2 flex size-4 items-center justify-center rounded-full bg-danger text-[10px] font-bold text-surface">
+                <span
+                  aria-hidden="true"
+                  className="absolute -top-2 -right-2 flex size-4 items-center justify-center rounded-full bg-danger text-[10px] font-bold text-surface"
+                >
                   !
                 </span>
               ) : null}

@@ -30,13 +30,17 @@ export function ThumbnailStrip({ tiles, scale, viewStart, viewWidth }: Thumbnail
       {slots.map(({ index, tile }) => {
         const scaleBy = STRIP_HEIGHT / tile.height;
         return (
-          <div key={index} className="absolute top-0 overflow-hidden" style={{ left: index * slotWidth, width: slotWidth, height: STRIP_HEIGHT }}>
+          <div
+            key={index}
+            className="absolute top-0 overflow-hidden"
+            style={{ left: index * slotWidth, width: slotWidth, height: STRIP_HEIGHT }}
+          >
             <div
               style={{
                 width: tile.width,
                 height: tile.height,
                 backgroundImage: `url("${tile.url.replace(/"/g, '%22')}")`,
-                backgroundPosition: `-${tile.x}px -${tile.y}px`,
+                backgroundPosition: `${-tile.x}px ${-tile.y}px`,
                 transform: `scale(${scaleBy})`,
                 transformOrigin: 'top left',
               }}

@@ -9,7 +9,11 @@ export function TimeRuler({ scale, viewStart, viewWidth }: { scale: TimelineScal
   return (
     <div className="relative h-6 border-b border-line bg-sunken text-xs text-ink-muted" aria-hidden="true">
       {ticksBetween(from, to, step).map((ms) => (
-        <span key={ms} className="absolute top-0 h-full border-l border-line-strong pl-1 leading-6 whitespace-nowrap" style={{ left: timeToX(ms, scale) }}>
+        <span
+          key={ms}
+          className="absolute top-0 h-full border-l border-line-strong pl-1 leading-6 whitespace-nowrap"
+          style={{ left: timeToX(ms, scale) }}
+        >
           {formatClock(ms, step < 1000)}
         </span>
       ))}

@@ -104,7 +104,13 @@ export function Timeline(props: TimelineProps) {
           </Button>
         ) : null}
         <div className="flex items-center gap-1" role="group" aria-label="Zoom">
-          <Button size="sm" variant="secondary" onClick={() => onZoom(zoomOut(zoom))} disabled={zoom <= ZOOM_LEVELS[0]} aria-label="Zoom out">
+          <Button
+            size="sm"
+            variant="secondary"
+            onClick={() => onZoom(zoomOut(zoom))}
+            disabled={zoom <= ZOOM_LEVELS[0]}
+            aria-label="Zoom out"
+          >
             −
           </Button>
           <span className="min-w-14 text-center text-sm font-bold" aria-live="polite">
@@ -122,12 +128,18 @@ export function Timeline(props: TimelineProps) {
           </Button>
         </div>
       </div>
-      <div ref={scrollRef} className="relative overflow-x-auto overflow-y-hidden" onScroll={(event) => setScrollLeft(event.currentTarget.scrollLeft)}>
+      <div
+        ref={scrollRef}
+        className="relative overflow-x-auto overflow-y-hidden"
+        onScroll={(event) => setScrollLeft(event.currentTarget.scrollLeft)}
+      >
         <div className="relative" style={{ width }}>
           {/* Clicking the ruler or the thumbnails seeks there; the keyboard seeks with the player's own controls and [ ]. */}
           <div onClick={seekFromClick} className="cursor-pointer" data-testid="seek-strip">
             <TimeRuler scale={scale} viewStart={scrollLeft} viewWidth={viewWidth} />
-            {props.tiles && props.tiles.length > 0 ? <ThumbnailStrip tiles={props.tiles} scale={scale} viewStart={scrollLeft} viewWidth={viewWidth} /> : null}
+            {props.tiles && props.tiles.length > 0 ? (
+              <ThumbnailStrip tiles={props.tiles} scale={scale} viewStart={scrollLeft} viewWidth={viewWidth} />
+            ) : null}
           </div>
           <ChapterLane
             chapters={props.chapters}

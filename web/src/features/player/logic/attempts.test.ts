@@ -1,0 +1,45 @@
+import { describe, expect, it } from 'vitest';
+import type { CheckpointGradeDto } from '@core/contracts';
+import { canTryAgain, hasAnswered, isFinished, nextAttempt, recordGrade, recordOf } from './attempts';
+
+const grade = (over: Partial<CheckpointGradeDto>): CheckpointGradeDto => ({
+  correct: false,
+  score: 0,
+  feedback: 'Not this one.',
+  mistake: null,
+  invalid: false,
+  attemptsLeft: 1,
+  hints: [],
+  reveal: null,
+  ...over,
+});
+const answer = { kind: 'numeric' as const, text: '4 mT' };
+
+describe('attempt book', () => {
+  it('starts at attempt 1 and counts read answers', () => {
+    let book = {};
+    expect(nextAttempt(book, 'k')).toBe(1);
+    book = recordGrade(book, 'k', 1, answer, grade({}));
+    expect(nextAttempt(book, 'k')).toBe(2);
+    expect(hasAnswered(recordOf(book, 'k'))).toBe(true);
+    expect(canTryAgain(recordOf(book, 'k'))).toBe(true);
+  });
+
+  it('keeps the attempt when the server could not read the answer', () => {
+    const book = recordGrade({}, 'k', 1, answer, grade({ invalid: true, feedback: 'Unknown unit "mTT".' }));
+    expect(nextAttempt(book, 'k')).toBe(1);
+    expect(hasAnswered(recordOf(book, 'k'))).toBe(false);
+    expect(recordOf(book, 'k').answer).toBeNull();
+    expect(canTryAgain(recordOf(book, 'k'))).toBe(false);
+  });
+
+  it('is finished when right or out of attempts', () => {
+    const right = recordGrade({}, 'k', 1, answer, grade({ correct: true, score: 1 }));
+    expect(isFinished(recordOf(right, 'k'))).toBe(true);
+    expect(canTryAgain(recordOf(right, 'k'))).toBe(false);
+    const spent = recordGrade({}, 'k', 2, answer, grade({ attemptsLeft: 0 }));
+    expect(isFinished(recordOf(spent, 'k'))).toBe(true);
+    expect(canTryAgain(recordOf(spent, 'k'))).toBe(false);
+    expect(isFinished(recordOf({}, 'k'))).toBe(false);
+  });
+});

@@ -1,0 +1,58 @@
+import { act, render, screen, waitFor } from '@testing-library/react';
+import { StrictMode } from 'react';
+import { describe, expect, it, vi } from 'vitest';
+import type { PlaybackDto } from '@core/contracts';
+import { testPlayback } from './player-test-support';
+import { VideoPlayer, type Player } from './video-player';
+
+const withCaptions: PlaybackDto = {
+  ...testPlayback,
+  posterUrl: '/media/poster-1.jpg',
+  captions: [
+    {
+      id: '22222222-2222-4222-8222-222222222222',
+      language: 'en',
+      label: 'English',
+      isDefault: true,
+      cueCount: 3,
+      url: '/api/recordings/r/captions/c.vtt',
+      updatedAt: '2026-01-01T00:00:00.000Z',
+    },
+  ],
+};
+
+describe('VideoPlayer', () => {
+  it('creates one video.js player with the poster and caption tracks, and disposes it on unmount', async () => {
+    const ready = vi.fn<(player: Player) => void>();
+    const { unmount } = render(
+      <StrictMode>
+        <VideoPlayer playback={withCaptions} onReady={ready} onRefresh={() => Promise.resolve(undefined)} label="Demo video" />
+      </StrictMode>,
+    );
+    await waitFor(() => expect(ready).toHaveBeenCalled());
+    const player = ready.mock.calls.at(-1)?.[0];
+    if (!player) throw new Error('no player');
+    // StrictMode mounted twice: only the live player is in the page.
+    expect(screen.getByRole('region', { name: 'Demo video' }).querySelectorAll('.video-js')).toHaveLength(1);
+    expect(player.isDisposed()).toBe(false);
+    expect(player.poster()).toBe('/media/poster-1.jpg');
+    const tracks = Array.from(player.el().querySelectorAll('track'));
+    expect(tracks.map((t) => [t.getAttribute('src'), t.getAttribute('srclang'), t.getAttribute('label')])).toEqual([['/api/recordings/r/captions/c.vtt', 'en', 'English']]);
+    unmount();
+    expect(player.isDisposed()).toBe(true);
+  });
+
+  it('swaps in fresh URLs from a new playback prop', async () => {
+    const ready = vi.fn<(player: Player) => void>();
+    const { rerender } = render(<VideoPlayer playback={testPlayback} onReady={ready} />);
+    await waitFor(() => expect(ready).toHaveBeenCalled());
+    const player = ready.mock.calls.at(-1)?.[0];
+    if (!player) throw new Error('no player');
+    const src = vi.spyOn(player, 'src');
+    act(() => rerender(<VideoPlayer playback={{ ...testPlayback, src: { url: '/media/demo.mp4?fresh=2', type: 'video/mp4' } }} onReady={ready} />));
+    expect(src).toHaveBeenCalledWith({ src: '/media/demo.mp4?fresh=2', type: 'video/mp4' });
+    src.mockClear();
+    act(() => rerender(<VideoPlayer playback={{ ...testPlayback, src: { url: '/media/demo.mp4?fresh=2', type: 'video/mp4' } }} onReady={ready} />));
+    expect(src).not.toHaveBeenCalled();
+  });
+});
