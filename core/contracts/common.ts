@@ -22,7 +22,10 @@ export const ApiErrorBodySchema = z.object({
   error: z.object({
     code: z.string(),
     message: z.string(),
-    details: z.array(z.object({ path: z.string(), message: z.string() })).optional(),
+    // Per-field problems; an error with facts of its own (a 409 edit_conflict's revision) sends an object, read by its caller.
+    details: z
+      .union([z.array(z.object({ path: z.string(), message: z.string() })), z.record(z.string(), z.unknown()).transform(() => [])])
+      .optional(),
   }),
 });
 export type ApiErrorBody = z.infer<typeof ApiErrorBodySchema>;

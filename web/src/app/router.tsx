@@ -15,10 +15,12 @@ const roleSection = (role: Role, path: string, children: RouteObject[]): RouteOb
   children,
 });
 
-// Lessons open read-only in every staff section; only a lesson's owner (a teacher) sees the studio's editing.
+// Lessons open read-only in every staff section; the studio edits only for the lesson's owner (or an admin).
 const lessonPages: RouteObject[] = [
   { path: 'lessons', lazy: page(() => import('./routes/lessons/lessons')) },
   { path: 'lessons/:lessonId', lazy: page(() => import('./routes/lessons/lesson-overview')) },
+  { path: 'lessons/:lessonId/preview', lazy: page(() => import('./routes/lessons/lesson-preview')) },
+  { path: 'lessons/:lessonId/studio', handle: { wide: true }, lazy: page(() => import('./routes/lessons/lesson-studio')) },
 ];
 
 export const routes: RouteObject[] = [

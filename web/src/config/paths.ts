@@ -17,7 +17,7 @@ export const paths = {
     list: (base: string) => `${base}/lessons`,
     create: (recordingId?: string) => `/teacher/lessons/new${recordingId ? `?recording=${encodeURIComponent(recordingId)}` : ''}`,
     overview: (base: string, lessonId: string) => `${base}/lessons/${lessonId}`,
-    studio: (lessonId: string) => `/teacher/lessons/${lessonId}/studio`,
+    studio: (base: string, lessonId: string) => `${base}/lessons/${lessonId}/studio`,
     preview: (base: string, lessonId: string) => `${base}/lessons/${lessonId}/preview`,
   },
   student: { home: '/student' },

@@ -15,13 +15,18 @@ export function useSectionBase(): SectionBase {
   return sectionBaseOf(useLocation().pathname);
 }
 
-/** Every lesson URL inside one section (from config/paths; create and studio exist in the teacher section only). */
+/** Every lesson URL inside one section (from config/paths; create exists in the teacher section only). */
 export function lessonPaths(base: SectionBase) {
   return {
     list: paths.lessons.list(base),
     create: paths.lessons.create,
     overview: (lessonId: string) => paths.lessons.overview(base, lessonId),
-    studio: paths.lessons.studio,
+    studio: (lessonId: string) => paths.lessons.studio(base, lessonId),
     preview: (lessonId: string) => paths.lessons.preview(base, lessonId),
   };
+}
+
+/** lessonPaths of the section in use. */
+export function useLessonPaths() {
+  return lessonPaths(useSectionBase());
 }

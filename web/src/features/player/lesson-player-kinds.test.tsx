@@ -35,8 +35,22 @@ describe('LessonPlayer kinds', { timeout: 20_000 }, () => {
   it('takes a prediction at the pin and shows it beside what happened at the reveal, with an explanation', async () => {
     const onAnswer = vi
       .fn<AnswerSender>()
-      .mockResolvedValueOnce(gradeOf({ correct: null, feedback: 'Prediction saved. Watch what happens next.', attemptsLeft: 0, reveal: { answer: '', explanation: 'The needle turned further.' } }))
-      .mockResolvedValueOnce(gradeOf({ correct: null, feedback: 'Prediction saved.', attemptsLeft: 0, reveal: { answer: '', explanation: 'The needle turned further.' } }));
+      .mockResolvedValueOnce(
+        gradeOf({
+          correct: null,
+          feedback: 'Prediction saved. Watch what happens next.',
+          attemptsLeft: 0,
+          reveal: { answer: '', explanation: 'The needle turned further.' },
+        }),
+      )
+      .mockResolvedValueOnce(
+        gradeOf({
+          correct: null,
+          feedback: 'Prediction saved.',
+          attemptsLeft: 0,
+          reveal: { answer: '', explanation: 'The needle turned further.' },
+        }),
+      );
     const { user } = renderView(viewOf([predictionAt('pred01', 2000, 9000)]), onAnswer);
     play();
     playTo(2100);
@@ -51,13 +65,44 @@ describe('LessonPlayer kinds', { timeout: 20_000 }, () => {
     expect(fake.ms).toBe(9000);
     const dialog = screen.getByRole('dialog');
     expect(within(within(dialog).getByRole('region', { name: 'Your prediction' })).getByText('Stay put')).toBeInTheDocument();
-    expect(within(within(dialog).getByRole('region', { name: 'What happened' })).getByText('The needle turned further.')).toBeInTheDocument();
+    expect(
+      within(within(dialog).getByRole('region', { name: 'What happened' })).getByText('The needle turned further.'),
+    ).toBeInTheDocument();
     await user.type(within(dialog).getByRole('textbox', { name: /Explain the difference/ }), 'The field grew with the current.');
     await user.click(within(dialog).getByRole('button', { name: 'Send my explanation' }));
-    expect(onAnswer).toHaveBeenLastCalledWith('pred01', { kind: 'prediction', optionId: 'p2', text: null, explanation: 'The field grew with the current.' }, 2);
+    expect(onAnswer).toHaveBeenLastCalledWith(
+      'pred01',
+      { kind: 'prediction', optionId: 'p2', text: null, explanation: 'The field grew with the current.' },
+      2,
+    );
     expect(await within(dialog).findByText('Your explanation')).toBeInTheDocument();
     await user.click(within(dialog).getByRole('button', { name: 'Continue' }));
     expect(fake.isPaused).toBe(false);
+  });
+
+  it('keeps whether a scored prediction matched until the reveal', async () => {
+    const scored = { ...predictionAt('pred02', 1000, 4000), scored: true, askExplanation: false } as StudentCheckpoint;
+    const onAnswer = vi.fn<AnswerSender>().mockResolvedValue(
+      gradeOf({
+        correct: false,
+        feedback: 'Saved. Watch closely.',
+        attemptsLeft: 0,
+        reveal: { answer: 'Turn further', explanation: 'More current, more field.' },
+      }),
+    );
+    const { user } = renderView(viewOf([scored]), onAnswer);
+    play();
+    playTo(1100);
+    await user.click(screen.getByRole('radio', { name: 'Stay put' }));
+    await user.click(screen.getByRole('button', { name: 'Save my prediction' }));
+    expect(await screen.findByText('Saved')).toBeInTheDocument();
+    expect(screen.queryByText('Not right yet')).toBeNull();
+    expect(screen.queryByRole('button', { name: 'Try again' })).toBeNull();
+    await user.click(screen.getByRole('button', { name: 'Continue' }));
+    playTo(4100);
+    expect(screen.getByText('Your prediction did not match.')).toBeInTheDocument();
+    expect(screen.getByText('More current, more field.')).toBeInTheDocument();
+    expect(screen.queryByRole('textbox')).toBeNull();
   });
 
   it('offers the sign choices by their labels and sends the chosen one', async () => {
@@ -85,8 +130,25 @@ describe('LessonPlayer kinds', { timeout: 20_000 }, () => {
   });
 
   it('shows a safety note and an equation card, each continued without an answer', async () => {
-    const note: StudentCheckpoint = { key: 'note01', atMs: 1000, label: '', behaviour: 'gate', kind: 'note', tone: 'safety', body: 'Switch the supply **off** before touching the coil.' };
-    const card: StudentCheckpoint = { key: 'card01', atMs: 3000, label: 'Field on the axis', behaviour: 'pause', kind: 'equation', latex: 'B = \\frac{\\mu_0 N I}{2R}', caption: 'At the centre of the coil.', model: null };
+    const note: StudentCheckpoint = {
+      key: 'note01',
+      atMs: 1000,
+      label: '',
+      behaviour: 'gate',
+      kind: 'note',
+      tone: 'safety',
+      body: 'Switch the supply **off** before touching the coil.',
+    };
+    const card: StudentCheckpoint = {
+      key: 'card01',
+      atMs: 3000,
+      label: 'Field on the axis',
+      behaviour: 'pause',
+      kind: 'equation',
+      latex: 'B = \\frac{\\mu_0 N I}{2R}',
+      caption: 'At the centre of the coil.',
+      model: null,
+    };
     const { user } = renderView(viewOf([note, card]));
     play();
     playTo(1100);
@@ -125,5 +187,8 @@ describe('LessonPlayer kinds', { timeout: 20_000 }, () => {
     expect(fake.ms).toBe(4000);
     expect(screen.getByText(/Answer this checkpoint before going past 0:04\.0/)).toBeInTheDocument();
     expect(screen.getByRole('button', { name: 'Checkpoint 1 of 1 at 0:04.0: Question gate01, must be answered' })).toBeInTheDocument();
+    // A tick on the progress bar at 4 s of 60 s.
+    const ticks = fake.element.querySelectorAll<HTMLElement>('.vjs-progress-holder [data-checkpoint-ticks] > span');
+    expect(Array.from(ticks).map((tick) => tick.style.left)).toEqual([`${(4 / 60) * 100}%`]);
   });
 });

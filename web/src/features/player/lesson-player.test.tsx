@@ -25,7 +25,9 @@ const grade = gradeOf;
 function renderPlayer(checkpoints: StudentCheckpoint[], onAnswer: AnswerSender = vi.fn(), safetyNotes = '') {
   const user = userEvent.setup();
   const onEvent = vi.fn();
-  const result = render(<LessonPlayer view={viewOf(checkpoints, safetyNotes)} playback={playback} onAnswer={onAnswer} mode="preview" onEvent={onEvent} />);
+  const result = render(
+    <LessonPlayer view={viewOf(checkpoints, safetyNotes)} playback={playback} onAnswer={onAnswer} mode="preview" onEvent={onEvent} />,
+  );
   return { ...result, user, onEvent };
 }
 
@@ -52,7 +54,15 @@ describe('LessonPlayer', { timeout: 20_000 }, () => {
     const onAnswer = vi
       .fn<AnswerSender>()
       .mockResolvedValueOnce(grade({ hints: ['Use the right-hand rule.'] }))
-      .mockResolvedValueOnce(grade({ correct: true, score: 1, feedback: 'Correct.', attemptsLeft: 0, reveal: { answer: 'Towards the coil', explanation: 'The field points along the axis.' } }));
+      .mockResolvedValueOnce(
+        grade({
+          correct: true,
+          score: 1,
+          feedback: 'Correct.',
+          attemptsLeft: 0,
+          reveal: { answer: 'Towards the coil', explanation: 'The field points along the axis.' },
+        }),
+      );
     const { user, container } = renderPlayer([mcAt('pause1', 5000)], onAnswer);
     play();
     playTo(5180);
@@ -120,7 +130,16 @@ describe('LessonPlayer', { timeout: 20_000 }, () => {
   });
 
   it('shows the server’s reading problem for a numeric answer without using an attempt', async () => {
-    const numeric: StudentCheckpoint = { key: 'numer1', atMs: 1000, label: '', behaviour: 'pause', ...answered, kind: 'numeric', prompt: 'Find the field at the centre.', askedUnit: 'mT' };
+    const numeric: StudentCheckpoint = {
+      key: 'numer1',
+      atMs: 1000,
+      label: '',
+      behaviour: 'pause',
+      ...answered,
+      kind: 'numeric',
+      prompt: 'Find the field at the centre.',
+      askedUnit: 'mT',
+    };
     const onAnswer = vi
       .fn<AnswerSender>()
       .mockResolvedValueOnce(grade({ invalid: true, feedback: 'The unit “mTT” is not one Pinfield knows.', attemptsLeft: 2 }))

@@ -41,7 +41,18 @@ export type LessonPlayerProps = {
  * The root's data-ready turns "true" once pins are watched, data-stop-ms is the pin time of the open
  * panel, data-current-ms the video's time (from its events).
  */
-export function LessonPlayer({ view, playback, onAnswer, mode, onEvent, onRefresh, onPlayer, safetyAcknowledged, initialBook, className }: LessonPlayerProps) {
+export function LessonPlayer({
+  view,
+  playback,
+  onAnswer,
+  mode,
+  onEvent,
+  onRefresh,
+  onPlayer,
+  safetyAcknowledged,
+  initialBook,
+  className,
+}: LessonPlayerProps) {
   const lesson = useLessonPlayer({ view, onAnswer, onEvent, safetyAcknowledged, initialBook });
   const { state, player } = lesson;
   const currentMs = useCurrentMs(player);

@@ -5,7 +5,15 @@ import { clockOf } from './media-clock';
 import { nextAttempt, type AttemptBook } from './logic/attempts';
 import { PinScheduler } from './logic/pin-scheduler';
 import { guardSeek } from './logic/seek-guard';
-import { initialPlayerState, isStopActive, isStopDone, playerReducer, type OverlayReason, type PlayerEvent, type PlayerState } from './logic/player-state';
+import {
+  initialPlayerState,
+  isStopActive,
+  isStopDone,
+  playerReducer,
+  type OverlayReason,
+  type PlayerEvent,
+  type PlayerState,
+} from './logic/player-state';
 import { buildStops, type Stop } from './logic/stops';
 import type { Player } from './video-player';
 

@@ -1,7 +1,9 @@
 import { act, render, screen, waitFor } from '@testing-library/react';
 import { StrictMode } from 'react';
-import { describe, expect, it, vi } from 'vitest';
+import { beforeAll, describe, expect, it, vi } from 'vitest';
+import { http, HttpResponse } from 'msw';
 import type { PlaybackDto } from '@core/contracts';
+import { server } from '@/testing/mocks/server';
 import { testPlayback } from './player-test-support';
 import { VideoPlayer, type Player } from './video-player';
 
@@ -21,8 +23,23 @@ const withCaptions: PlaybackDto = {
   ],
 };
 
+// jsdom has no CSS.supports and plays no media: say MP4 is playable so video.js loads its HTML5 tech.
+beforeAll(() => {
+  if (typeof window.CSS?.supports !== 'function') Object.assign(window.CSS ?? (window.CSS = {} as typeof CSS), { supports: () => false });
+  vi.spyOn(HTMLMediaElement.prototype, 'canPlayType').mockReturnValue('maybe');
+  vi.spyOn(HTMLMediaElement.prototype, 'load').mockImplementation(() => undefined);
+  vi.spyOn(HTMLMediaElement.prototype, 'pause').mockImplementation(() => undefined);
+});
+
 describe('VideoPlayer', () => {
   it('creates one video.js player with the poster and caption tracks, and disposes it on unmount', async () => {
+    server.use(
+      http.get(
+        '/api/recordings/r/captions/c.vtt',
+        () =>
+          new HttpResponse('WEBVTT\n\n00:00.000 --> 00:02.000\nThe coil is switched on.\n', { headers: { 'Content-Type': 'text/vtt' } }),
+      ),
+    );
     const ready = vi.fn<(player: Player) => void>();
     const { unmount } = render(
       <StrictMode>
@@ -36,8 +53,10 @@ describe('VideoPlayer', () => {
     expect(screen.getByRole('region', { name: 'Demo video' }).querySelectorAll('.video-js')).toHaveLength(1);
     expect(player.isDisposed()).toBe(false);
     expect(player.poster()).toBe('/media/poster-1.jpg');
-    const tracks = Array.from(player.el().querySelectorAll('track'));
-    expect(tracks.map((t) => [t.getAttribute('src'), t.getAttribute('srclang'), t.getAttribute('label')])).toEqual([['/api/recordings/r/captions/c.vtt', 'en', 'English']]);
+    const tracks = player.remoteTextTrackEls() as unknown as ArrayLike<HTMLTrackElement>;
+    expect(Array.from({ length: tracks.length }, (_, i) => tracks[i]).map((t) => [t?.src, t?.srclang, t?.label, t?.kind])).toEqual([
+      [expect.stringContaining('/api/recordings/r/captions/c.vtt'), 'en', 'English', 'captions'],
+    ]);
     unmount();
     expect(player.isDisposed()).toBe(true);
   });
@@ -49,10 +68,14 @@ describe('VideoPlayer', () => {
     const player = ready.mock.calls.at(-1)?.[0];
     if (!player) throw new Error('no player');
     const src = vi.spyOn(player, 'src');
-    act(() => rerender(<VideoPlayer playback={{ ...testPlayback, src: { url: '/media/demo.mp4?fresh=2', type: 'video/mp4' } }} onReady={ready} />));
+    act(() =>
+      rerender(<VideoPlayer playback={{ ...testPlayback, src: { url: '/media/demo.mp4?fresh=2', type: 'video/mp4' } }} onReady={ready} />),
+    );
     expect(src).toHaveBeenCalledWith({ src: '/media/demo.mp4?fresh=2', type: 'video/mp4' });
     src.mockClear();
-    act(() => rerender(<VideoPlayer playback={{ ...testPlayback, src: { url: '/media/demo.mp4?fresh=2', type: 'video/mp4' } }} onReady={ready} />));
+    act(() =>
+      rerender(<VideoPlayer playback={{ ...testPlayback, src: { url: '/media/demo.mp4?fresh=2', type: 'video/mp4' } }} onReady={ready} />),
+    );
     expect(src).not.toHaveBeenCalled();
   });
 });

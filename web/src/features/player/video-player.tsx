@@ -121,6 +121,8 @@ export function VideoPlayer({ playback, onReady, onRefresh, label = 'Video', cla
       if (keeper.onError()) refresh(created);
       else setStuck(true);
     });
+    // Focusable, so focus can come back to the player (and its keyboard shortcuts) after a panel closes.
+    if (!created.el().hasAttribute('tabindex')) created.el().setAttribute('tabindex', '-1');
     created.ready(() => latest.current.onReady?.(created));
     setPlayer(created);
     return () => {
@@ -146,17 +148,25 @@ export function VideoPlayer({ playback, onReady, onRefresh, label = 'Video', cla
     if (player && !player.isDisposed()) player.poster(posterUrl ?? '');
   }, [player, posterUrl]);
 
-  // Caption tracks, rebuilt when the list changes.
+  // Caption tracks, rebuilt when the list changes. They go to the tech, which exists only once the player is ready.
   const captions = captionSignature(playback);
   useEffect(() => {
     if (!player || player.isDisposed()) return;
-    const added = latest.current.playback.captions.map((caption) =>
-      player.addRemoteTextTrack(
-        { kind: 'captions', src: caption.url, srclang: caption.language, label: caption.label, default: caption.isDefault },
-        true,
-      ),
-    );
+    let cancelled = false;
+    const added: ReturnType<Player['addRemoteTextTrack']>[] = [];
+    player.ready(() => {
+      if (cancelled || player.isDisposed()) return;
+      for (const caption of latest.current.playback.captions) {
+        added.push(
+          player.addRemoteTextTrack(
+            { kind: 'captions', src: caption.url, srclang: caption.language, label: caption.label, default: caption.isDefault },
+            true,
+          ),
+        );
+      }
+    });
     return () => {
+      cancelled = true;
       if (player.isDisposed()) return;
       for (const track of added) player.removeRemoteTextTrack(track);
     };

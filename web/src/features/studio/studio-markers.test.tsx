@@ -1,5 +1,5 @@
 import { fireEvent, screen, waitFor, within } from '@testing-library/react';
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import { newCheckpoint } from '@core/lessons/new-checkpoint';
 import { buildContent, buildStudioLesson, fakePlayer, mockDraftSaves, renderStudio } from './studio.test-support';
 
@@ -9,8 +9,12 @@ function twoCheckpoints() {
   return { first, second, lesson: buildStudioLesson(buildContent({ checkpoints: [first, second] })) };
 }
 
-describe('studio: markers', { timeout: 20_000 }, () => {
+afterEach(() => vi.restoreAllMocks());
+
+describe('studio: markers', { timeout: 40_000 }, () => {
   it('moves focus between markers with arrow keys, selects with Enter and nudges by a frame and a second', async () => {
+    // Undo steps coalesce by the clock: a fixed clock makes the burst one step however slowly the machine types.
+    vi.spyOn(Date, 'now').mockReturnValue(Date.parse('2026-01-05T14:01:00.000Z'));
     const { lesson } = twoCheckpoints();
     const saves = mockDraftSaves(lesson);
     const { user } = renderStudio(lesson, { player: fakePlayer(0) });

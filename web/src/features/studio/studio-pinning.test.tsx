@@ -3,7 +3,7 @@ import { describe, expect, it } from 'vitest';
 import { newCheckpoint } from '@core/lessons/new-checkpoint';
 import { buildContent, buildStudioLesson, fakePlayer, mockDraftSaves, renderStudio } from './studio.test-support';
 
-describe('studio: pinning', { timeout: 20_000 }, () => {
+describe('studio: pinning', { timeout: 40_000 }, () => {
   it('pins at the current frame from the Pin menu and with P then a digit, and saves', async () => {
     const lesson = buildStudioLesson(buildContent());
     const saves = mockDraftSaves(lesson);

@@ -1,14 +1,18 @@
 import { screen, waitFor, within } from '@testing-library/react';
 import { http, HttpResponse } from 'msw';
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it, vi } from 'vitest';
 import type { DraftSave, DraftSavedDto, VersionSummaryDto } from '@core/contracts';
 import { newCheckpoint } from '@core/lessons/new-checkpoint';
 import { apiError } from '@/testing/mocks/handlers';
 import { server } from '@/testing/mocks/server';
 import { buildContent, buildStudioLesson, mockDraftSaves, renderStudio } from './studio.test-support';
 
-describe('studio: saving', { timeout: 30_000 }, () => {
+afterEach(() => vi.restoreAllMocks());
+
+describe('studio: saving', { timeout: 40_000 }, () => {
   it('autosaves after typing, shows the state, and undoes a typing burst as one step', async () => {
+    // Undo steps coalesce by the clock: a fixed clock makes the burst one step however slowly the machine types.
+    vi.spyOn(Date, 'now').mockReturnValue(Date.parse('2026-01-05T14:01:00.000Z'));
     const lesson = buildStudioLesson(buildContent());
     const saves = mockDraftSaves(lesson);
     const { user } = renderStudio(lesson);

@@ -118,7 +118,7 @@ export function StudioScreen(props: StudioScreenProps) {
   const currentFrame = snapToFrame(currentMs, frameRate);
 
   return (
-    <div className="ml-[calc(50%-min(50vw-1rem,55rem))] flex w-[min(calc(100vw-2rem),110rem)] flex-col gap-3">
+    <div className="flex flex-col gap-3">
       <Banner tone="info" title="The studio needs a wider screen" className="md:hidden">
         Building a lesson needs a laptop, desktop or projector (at least 768 pixels wide). On a phone, open the student preview instead.
       </Banner>

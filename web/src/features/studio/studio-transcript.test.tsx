@@ -8,7 +8,7 @@ import { buildContent, buildStudioLesson, buildStudioPlayback, fakePlayer, mockD
 const VTT =
   'WEBVTT\n\n00:01.000 --> 00:04.000\nThe compass needle points north.\n\n00:04.000 --> 00:08.500\nNow we switch the current on.\n';
 
-describe('studio: transcript and timeline media', { timeout: 20_000 }, () => {
+describe('studio: transcript and timeline media', { timeout: 40_000 }, () => {
   it('lists the caption lines, highlights the current one, jumps on click and pins from a line', async () => {
     const lesson = buildStudioLesson(buildContent());
     mockDraftSaves(lesson);

@@ -37,7 +37,7 @@ export default function LessonPreviewRoute() {
         </Button>
       </div>
       <Banner tone="info" title="Preview" className="mb-4">
-        <p>Preview — answers are graded as a student’s would be, and nothing is recorded.</p>
+        <p>Answers are graded as a student’s would be, and nothing is recorded.</p>
       </Banner>
       {view.isPending || playback.isPending ? <Loading label="Preparing the preview…" /> : null}
       {view.isError && !view.data ? <ErrorBanner error={view.error} title="The lesson could not be loaded for preview" /> : null}

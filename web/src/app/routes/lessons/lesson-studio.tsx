@@ -4,15 +4,15 @@ import { Banner } from '@/components/ui/banner';
 import { buttonVariants } from '@/components/ui/button';
 import { ErrorBanner } from '@/components/ui/error-banner';
 import { Loading } from '@/components/ui/spinner';
-import { paths } from '@/config/paths';
 import { CheckpointForm } from '@/features/checkpoint-forms/checkpoint-form';
 import { lessonQueryOptions } from '@/features/lessons/api/get-lesson';
+import { useLessonPaths } from '@/features/lessons/section-base';
 import { VideoPlayer } from '@/features/player/video-player';
 import { lessonPlaybackQueryOptions } from '@/features/studio/api/get-lesson-media';
 import { StudioScreen } from '@/features/studio/studio-screen';
 import { useSchoolClock } from '../homes/use-school-clock';
 
-/** The lesson studio (teacher section): pin checkpoints on the recording, edit them, preview and publish. */
+/** The lesson studio (a teacher's lessons, a substitute's own copies): pin checkpoints on the recording, edit them, preview and publish. */
 export default function LessonStudioRoute() {
   const { lessonId = '' } = useParams();
   const [search] = useSearchParams();
@@ -21,8 +21,9 @@ export default function LessonStudioRoute() {
   const lesson = useQuery({ ...lessonQueryOptions(lessonId), refetchOnWindowFocus: false });
   const canOpen = lesson.data?.canEdit === true && lesson.data.recording.ready;
   const playback = useQuery({ ...lessonPlaybackQueryOptions(lessonId), enabled: canOpen });
-  const overviewTo = paths.lessons.overview('/teacher', lessonId);
-  const previewTo = paths.lessons.preview('/teacher', lessonId);
+  const lessonPaths = useLessonPaths();
+  const overviewTo = lessonPaths.overview(lessonId);
+  const previewTo = lessonPaths.preview(lessonId);
 
   if (lesson.isPending) return <Loading label="Opening the studio…" />;
   if (lesson.isError) return <ErrorBanner error={lesson.error} title="This lesson could not be opened in the studio" />;

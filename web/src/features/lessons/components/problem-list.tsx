@@ -1,6 +1,6 @@
 import { Link } from 'react-router-dom';
 import type { LessonContent, LessonProblem } from '@core/contracts';
-import { paths } from '@/config/paths';
+import { useLessonPaths } from '../section-base';
 import { problemPlace } from '../problem-place';
 
 type ProblemListProps = { lessonId: string; problems: LessonProblem[]; content: LessonContent; canEdit: boolean; label: string };
@@ -10,6 +10,7 @@ type ProblemListProps = { lessonId: string; problems: LessonProblem[]; content: 
  * studio at that place (`?problem=<path>`).
  */
 export function ProblemList({ lessonId, problems, content, canEdit, label }: ProblemListProps) {
+  const studioPath = useLessonPaths().studio;
   return (
     <ul aria-label={label} className="mt-1 flex list-disc flex-col gap-1 pl-5">
       {problems.map((problem) => {
@@ -18,7 +19,7 @@ export function ProblemList({ lessonId, problems, content, canEdit, label }: Pro
           <li key={`${problem.path}:${problem.message}`}>
             {canEdit ? (
               <Link
-                to={`${paths.lessons.studio(lessonId)}?problem=${encodeURIComponent(problem.path)}`}
+                to={`${studioPath(lessonId)}?problem=${encodeURIComponent(problem.path)}`}
                 className="font-bold text-copper underline"
               >
                 {place}

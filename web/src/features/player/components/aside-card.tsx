@@ -35,7 +35,11 @@ export function AsideCard({ checkpoint, record, busy, sendError, onSubmit, onDis
         </Button>
       </div>
       <CheckpointBody checkpoint={checkpoint} record={record} phase={phase} busy={busy} onSubmit={onSubmit} />
-      {sendError ? <p role="alert" className="font-bold text-danger">{sendError}</p> : null}
+      {sendError ? (
+        <p role="alert" className="font-bold text-danger">
+          {sendError}
+        </p>
+      ) : null}
       {phase === 'graded' && canTryAgain(record) ? (
         <div>
           <Button variant="secondary" onClick={() => setRetryOf(record.grade)}>

@@ -18,7 +18,19 @@ export type CheckpointBodyProps = {
   onSubmit: (answer: CheckpointAnswer) => void;
 };
 
-function AnswerForm({ checkpoint, locked, busy, problem, onSubmit }: { checkpoint: StudentCheckpoint; locked: boolean; busy: boolean; problem: string | null; onSubmit: (answer: CheckpointAnswer) => void }) {
+function AnswerForm({
+  checkpoint,
+  locked,
+  busy,
+  problem,
+  onSubmit,
+}: {
+  checkpoint: StudentCheckpoint;
+  locked: boolean;
+  busy: boolean;
+  problem: string | null;
+  onSubmit: (answer: CheckpointAnswer) => void;
+}) {
   const common = { locked, busy, problem, onSubmit };
   switch (checkpoint.kind) {
     case 'multiple-choice':
@@ -46,7 +58,9 @@ export function CheckpointBody({ checkpoint, record, phase, busy, onSubmit }: Ch
     <div className="flex flex-col gap-4">
       <RichText markdown={checkpoint.prompt} className="text-lg" />
       <AnswerForm checkpoint={checkpoint} locked={phase === 'graded'} busy={busy} problem={problem} onSubmit={onSubmit} />
-      {phase === 'graded' && grade && !grade.invalid ? <GradePanel grade={grade} showReveal={checkpoint.kind !== 'prediction'} /> : null}
+      {phase === 'graded' && grade && !grade.invalid ? (
+        <GradePanel grade={grade} showReveal={checkpoint.kind !== 'prediction'} verdictLater={checkpoint.kind === 'prediction'} />
+      ) : null}
     </div>
   );
 }

@@ -42,13 +42,23 @@ export function CheckpointOverlay(props: CheckpointOverlayProps) {
   const showContinue = isReveal || !answerable || (!asking && !gateLocked) || (asking && hasAnswered(record));
   const headingId = `checkpoint-${overlay.stop.id.replace(/[^a-z0-9]/g, '-')}-heading`;
   return (
-    <section role="dialog" aria-modal="false" aria-labelledby={headingId} className="flex flex-col gap-4 rounded-lg border border-line-strong bg-paper p-4 shadow-lg sm:p-5">
+    <section
+      role="dialog"
+      aria-modal="false"
+      aria-labelledby={headingId}
+      className="flex flex-col gap-4 rounded-lg border border-line-strong bg-paper p-4 shadow-lg sm:p-5"
+    >
       <header className="flex flex-col gap-1">
         <p className="text-sm text-ink-muted">
           {isReveal ? 'Prediction: what happened' : CHECKPOINT_KIND_LABELS[checkpoint.kind]} · {formatTime(overlay.stop.atMs)}
           {overlay.stop.behaviour === 'gate' && !isReveal ? ' · answer to go on' : ''}
         </p>
-        <h2 id={headingId} ref={headingRef} tabIndex={-1} className="text-xl font-bold outline-none focus-visible:ring-2 focus-visible:ring-focus">
+        <h2
+          id={headingId}
+          ref={headingRef}
+          tabIndex={-1}
+          className="text-xl font-bold outline-none focus-visible:ring-2 focus-visible:ring-focus"
+        >
           {title}
         </h2>
       </header>
@@ -69,7 +79,7 @@ export function CheckpointOverlay(props: CheckpointOverlayProps) {
             Skip for now
           </Button>
         ) : null}
-        {!asking && canTryAgain(record) && !isReveal ? (
+        {!asking && canTryAgain(record) && !isReveal && checkpoint.kind !== 'prediction' ? (
           <Button variant="secondary" size="lg" onClick={props.onTryAgain}>
             Try again
           </Button>

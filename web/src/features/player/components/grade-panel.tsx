@@ -7,6 +7,8 @@ type GradePanelProps = {
   grade: CheckpointGradeDto;
   /** A prediction keeps its reveal for the reveal time; every other kind shows it when the server sends it. */
   showReveal: boolean;
+  /** A prediction at its pin: whether it matched is told at the reveal, so the verdict reads "Saved". */
+  verdictLater?: boolean;
 };
 
 const VERDICTS = {
@@ -21,11 +23,16 @@ function attemptsText(left: number): string {
 }
 
 /** What the server's grade said, in words and an icon (never colour alone). */
-export function GradePanel({ grade, showReveal }: GradePanelProps) {
-  const verdict = VERDICTS[grade.correct === true ? 'right' : grade.correct === false ? 'wrong' : 'saved'];
+export function GradePanel({ grade, showReveal, verdictLater = false }: GradePanelProps) {
+  const shown = verdictLater ? null : grade.correct;
+  const verdict = VERDICTS[shown === true ? 'right' : shown === false ? 'wrong' : 'saved'];
   const { Icon } = verdict;
   return (
-    <section aria-label="Result" className={cn('flex flex-col gap-3 rounded-md border-l-4 px-4 py-3', verdict.tone)} data-verdict={grade.correct === null ? 'saved' : String(grade.correct)}>
+    <section
+      aria-label="Result"
+      className={cn('flex flex-col gap-3 rounded-md border-l-4 px-4 py-3', verdict.tone)}
+      data-verdict={shown === null ? 'saved' : String(shown)}
+    >
       <p className="flex items-center gap-2 text-lg font-bold" role="status">
         <Icon className={cn('size-6 shrink-0', verdict.icon)} />
         {verdict.words}
@@ -43,7 +50,7 @@ export function GradePanel({ grade, showReveal }: GradePanelProps) {
           </ol>
         </div>
       ) : null}
-      {grade.correct === false ? <p className="text-sm">{attemptsText(grade.attemptsLeft)}</p> : null}
+      {shown === false ? <p className="text-sm">{attemptsText(grade.attemptsLeft)}</p> : null}
       {showReveal && grade.reveal ? <RevealText answer={grade.reveal.answer} explanation={grade.reveal.explanation} /> : null}
     </section>
   );

@@ -8,7 +8,12 @@ export function NoteView({ checkpoint }: { checkpoint: Extract<StudentCheckpoint
   const safety = checkpoint.tone === 'safety';
   const Icon = safety ? AlertIcon : InfoIcon;
   return (
-    <div className={cn('flex items-start gap-3 rounded-md border-l-4 px-4 py-3', safety ? 'border-copper bg-copper-soft' : 'border-teal bg-teal-soft')}>
+    <div
+      className={cn(
+        'flex items-start gap-3 rounded-md border-l-4 px-4 py-3',
+        safety ? 'border-copper bg-copper-soft' : 'border-teal bg-teal-soft',
+      )}
+    >
       <Icon className={cn('mt-1 size-6 shrink-0', safety ? 'text-copper' : 'text-teal')} />
       <div className="min-w-0 flex-1">
         <p className="font-bold">{safety ? 'Safety caution' : 'Remark'}</p>

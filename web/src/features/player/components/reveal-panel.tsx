@@ -3,6 +3,7 @@ import type { CheckpointAnswer, StudentCheckpoint } from '@core/contracts';
 import { RichText } from '@/components/rich-text/rich-text';
 import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
+import { AlertIcon, CheckIcon } from '@/components/ui/icons';
 import { Textarea } from '@/components/ui/input';
 import type { AttemptRecord } from '../logic/attempts';
 import { RevealText } from './grade-panel';
@@ -43,6 +44,12 @@ export function RevealPanel({ checkpoint, record, busy, onSubmit }: RevealPanelP
         </section>
         <section aria-label="What happened" className="rounded-md border border-teal bg-teal-soft px-3 py-2">
           <p className="font-bold">What happened</p>
+          {reveal && checkpoint.scored && record.grade?.correct !== null ? (
+            <p className="flex items-center gap-2 font-bold">
+              {record.grade?.correct ? <CheckIcon className="size-5 text-success" /> : <AlertIcon className="size-5 text-danger" />}
+              {record.grade?.correct ? 'Your prediction matched.' : 'Your prediction did not match.'}
+            </p>
+          ) : null}
           {reveal ? (
             <RevealText answer={checkpoint.scored ? reveal.answer : ''} explanation={reveal.explanation} />
           ) : (
@@ -57,7 +64,9 @@ export function RevealPanel({ checkpoint, record, busy, onSubmit }: RevealPanelP
         </div>
       ) : checkpoint.askExplanation ? (
         <Field label="Explain the difference (optional)" hint="What did you expect, what happened instead, and why?">
-          {(control) => <Textarea {...control} rows={3} value={explanation} disabled={busy} onChange={(event) => setExplanation(event.target.value)} />}
+          {(control) => (
+            <Textarea {...control} rows={3} value={explanation} disabled={busy} onChange={(event) => setExplanation(event.target.value)} />
+          )}
         </Field>
       ) : null}
       {!reveal ? (

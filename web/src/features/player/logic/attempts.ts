@@ -22,7 +22,13 @@ export function nextAttempt(book: AttemptBook, key: string): number {
 }
 
 /** The book after the server graded `attempt`. */
-export function recordGrade(book: AttemptBook, key: string, attempt: number, answer: CheckpointAnswer, grade: CheckpointGradeDto): AttemptBook {
+export function recordGrade(
+  book: AttemptBook,
+  key: string,
+  attempt: number,
+  answer: CheckpointAnswer,
+  grade: CheckpointGradeDto,
+): AttemptBook {
   const before = recordOf(book, key);
   if (grade.invalid) return { ...book, [key]: { ...before, grade } };
   return { ...book, [key]: { used: Math.max(before.used, attempt), answer, grade } };

@@ -170,7 +170,9 @@ export class PinScheduler {
     const now = this.clock.currentMs();
     if (this.clock.paused()) return;
     // A pin crossed since the last look, during plain playback (a seek moves lastMs past it).
-    const crossed = this.stops.find((s) => s.atMs >= this.lastMs - SAME_MOMENT_MS && s.atMs <= now + SAME_MOMENT_MS && this.hooks.isActive(s));
+    const crossed = this.stops.find(
+      (s) => s.atMs >= this.lastMs - SAME_MOMENT_MS && s.atMs <= now + SAME_MOMENT_MS && this.hooks.isActive(s),
+    );
     this.lastMs = now;
     if (crossed) this.reach(crossed);
   }

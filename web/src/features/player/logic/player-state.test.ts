@@ -4,13 +4,24 @@ import { initialPlayerState, isStopActive, isStopDone, playerReducer, type Playe
 import { buildStops } from './stops';
 import { mcAt, predictionAt, viewOf } from './test-view';
 
-const stops = buildStops(viewOf([mcAt('pause1', 1000), mcAt('gate01', 2000, 'gate'), mcAt('aside1', 3000, 'aside'), predictionAt('pred01', 4000, 6000)]));
+const stops = buildStops(
+  viewOf([mcAt('pause1', 1000), mcAt('gate01', 2000, 'gate'), mcAt('aside1', 3000, 'aside'), predictionAt('pred01', 4000, 6000)]),
+);
 const stop = (id: string) => {
   const found = stops.find((s) => s.id === id);
   if (!found) throw new Error(`no stop ${id}`);
   return found;
 };
-const wrong: CheckpointGradeDto = { correct: false, score: 0, feedback: 'No.', mistake: null, invalid: false, attemptsLeft: 1, hints: ['Look again.'], reveal: null };
+const wrong: CheckpointGradeDto = {
+  correct: false,
+  score: 0,
+  feedback: 'No.',
+  mistake: null,
+  invalid: false,
+  attemptsLeft: 1,
+  hints: ['Look again.'],
+  reveal: null,
+};
 const unread: CheckpointGradeDto = { ...wrong, invalid: true, feedback: 'Choose an option.', hints: [] };
 const mc = { kind: 'multiple-choice' as const, optionIds: ['a'] };
 
@@ -40,7 +51,11 @@ describe('playerReducer', () => {
   });
 
   it('keeps an unread answer in the form without counting it', () => {
-    const state = run(initialPlayerState(false), { type: 'reach', stop: stop('gate01'), reason: 'reached' }, { type: 'graded', key: 'gate01', attempt: 1, answer: mc, grade: unread });
+    const state = run(
+      initialPlayerState(false),
+      { type: 'reach', stop: stop('gate01'), reason: 'reached' },
+      { type: 'graded', key: 'gate01', attempt: 1, answer: mc, grade: unread },
+    );
     expect(state.overlay?.phase).toBe('asking');
     expect(isStopDone(state, stop('gate01'))).toBe(false);
   });
@@ -76,7 +91,11 @@ describe('playerReducer', () => {
       grade: { ...wrong, correct: null, attemptsLeft: 0 },
     });
     expect(isStopActive(predicted, stop('pred01:reveal'))).toBe(true);
-    const revealed = run(predicted, { type: 'reach', stop: stop('pred01:reveal'), reason: 'reached' }, { type: 'continue', answerable: true });
+    const revealed = run(
+      predicted,
+      { type: 'reach', stop: stop('pred01:reveal'), reason: 'reached' },
+      { type: 'continue', answerable: true },
+    );
     expect(isStopActive(revealed, stop('pred01:reveal'))).toBe(false);
   });
 

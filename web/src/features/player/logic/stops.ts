@@ -34,7 +34,14 @@ export function buildStops(view: StudentLessonView): Stop[] {
       pauses: checkpoint.behaviour !== 'aside',
     });
     if (checkpoint.kind === 'prediction') {
-      stops.push({ id: revealId(checkpoint.key), key: checkpoint.key, atMs: checkpoint.revealAtMs, phase: 'reveal', behaviour: 'pause', pauses: true });
+      stops.push({
+        id: revealId(checkpoint.key),
+        key: checkpoint.key,
+        atMs: checkpoint.revealAtMs,
+        phase: 'reveal',
+        behaviour: 'pause',
+        pauses: true,
+      });
     }
   }
   // Stable: at the same moment a pin comes before a reveal.

@@ -43,7 +43,11 @@ export function ChoiceList({ legend, options, several, chosen, disabled, onChang
                 else onChange(event.target.checked ? [...chosen, option.id] : chosen.filter((id) => id !== option.id));
               }}
             />
-            {markdown ? <RichText markdown={option.text} className="min-w-0 flex-1" /> : <span className="min-w-0 flex-1">{option.text}</span>}
+            {markdown ? (
+              <RichText markdown={option.text} className="min-w-0 flex-1" />
+            ) : (
+              <span className="min-w-0 flex-1">{option.text}</span>
+            )}
           </label>
         );
       })}
