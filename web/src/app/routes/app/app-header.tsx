@@ -6,6 +6,7 @@ import { paths, roleHome } from '@/config/paths';
 import { activeMembership } from '@/features/auth/api/get-me';
 import { RoleSwitcher } from '@/features/auth/components/role-switcher';
 import { SignOutButton } from '@/features/auth/components/sign-out-button';
+import { cn } from '@/lib/cn';
 
 // The sections of a role with more than one page; the admin section has its own navigation.
 const SECTIONS: Partial<Record<Role, TabLink[]>> = {
@@ -24,22 +25,23 @@ const SECTIONS: Partial<Record<Role, TabLink[]>> = {
   ],
 };
 
-function SectionNav({ role }: { role: Role }) {
+function SectionNav({ role, width }: { role: Role; width: string }) {
   const links = SECTIONS[role];
   if (!links) return null;
-  return <TabNav label={`${ROLE_LABELS[role]} pages`} links={links} className="mx-auto max-w-6xl px-4 sm:px-6" />;
+  return <TabNav label={`${ROLE_LABELS[role]} pages`} links={links} className={cn('mx-auto px-4 sm:px-6', width)} />;
 }
 
 /**
  * Product name, the school being worked in, who is signed in and as what, the role switcher and sign-out.
  * On a phone: name and sign-out on the first line, the school, person and switcher below.
  */
-export function AppHeader({ me }: { me: MeDto }) {
+export function AppHeader({ me, wide = false }: { me: MeDto; wide?: boolean }) {
+  const width = wide ? 'max-w-screen-2xl' : 'max-w-6xl';
   const membership = activeMembership(me);
   const school = membership ? <span className="font-bold text-ink-muted">{membership.schoolName}</span> : null;
   return (
     <header className="border-b border-line bg-surface">
-      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6">
+      <div className={cn('mx-auto flex flex-wrap items-center gap-x-6 gap-y-2 px-4 py-3 sm:px-6', width)}>
         <div className="order-1 flex min-w-0 items-center gap-4">
           <Brand to={roleHome(me.active.role)} />
           {school ? <span className="hidden border-l-2 border-copper pl-3 md:inline">{school}</span> : null}
@@ -56,7 +58,7 @@ export function AppHeader({ me }: { me: MeDto }) {
           <RoleSwitcher me={me} />
         </div>
       </div>
-      <SectionNav role={me.active.role} />
+      <SectionNav role={me.active.role} width={width} />
     </header>
   );
 }

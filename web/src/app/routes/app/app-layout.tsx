@@ -28,7 +28,7 @@ export function AppLayout() {
   return (
     <MeProvider me={me.data}>
       <div className="flex min-h-dvh flex-col">
-        <AppHeader me={me.data} />
+        <AppHeader me={me.data} wide={wide} />
         <main id="main" className={cn('mx-auto w-full flex-1 px-4 sm:px-6', wide ? 'max-w-screen-2xl py-4' : 'max-w-6xl py-8')}>
           <Outlet />
         </main>

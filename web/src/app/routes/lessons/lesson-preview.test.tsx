@@ -55,7 +55,7 @@ describe('lesson preview page', { timeout: 20_000 }, () => {
     mockLesson();
     renderPreview('/substitute');
     expect(await screen.findByRole('heading', { name: 'Preview: Coil and compass (demo)' })).toBeInTheDocument();
-    expect(screen.getByText('Preview — answers are graded as a student’s would be, and nothing is recorded.')).toBeInTheDocument();
+    expect(screen.getByText('Answers are graded as a student’s would be, and nothing is recorded.')).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Back to the lesson' })).toHaveAttribute('href', `/substitute/lessons/${lessonId}`);
   });
 
