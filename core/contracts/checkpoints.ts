@@ -39,24 +39,33 @@ export const CHECKPOINT_KINDS = ['multiple-choice', 'numeric', 'short-text', 'eq
 export type CheckpointKind = (typeof CHECKPOINT_KINDS)[number];
 
 const timeMs = (what: string) =>
-  z.number({ error: `Expected ${what} in milliseconds.` }).int({ error: `${capitalise(what)} is a whole number of milliseconds.` }).min(0, {
-    error: `${capitalise(what)} cannot be before the start of the recording.`,
-  });
+  z
+    .number({ error: `Expected ${what} in milliseconds.` })
+    .int({ error: `${capitalise(what)} is a whole number of milliseconds.` })
+    .min(0, {
+      error: `${capitalise(what)} cannot be before the start of the recording.`,
+    });
 
 const base = {
   key: CheckpointKeySchema,
   atMs: timeMs('the time'),
   /** Shown on the timeline marker and in results; empty means "use the start of the prompt". */
-  label: z.string().trim().max(LIMITS.checkpointLabelMax, { error: `A label has at most ${LIMITS.checkpointLabelMax} characters.` }),
+  label: z
+    .string()
+    .trim()
+    .max(LIMITS.checkpointLabelMax, { error: `A label has at most ${LIMITS.checkpointLabelMax} characters.` }),
   behaviour: BehaviourSchema,
 };
 
 /** Kinds a student answers: whether they must, what it is worth, and the help they get after a wrong try. */
 const answered = {
   required: z.boolean(),
-  points: z.number({ error: 'Expected points as a number.' }).min(0, { error: 'Points cannot be negative.' }).max(LIMITS.pointsMax, {
-    error: `A checkpoint is worth at most ${LIMITS.pointsMax} points.`,
-  }),
+  points: z
+    .number({ error: 'Expected points as a number.' })
+    .min(0, { error: 'Points cannot be negative.' })
+    .max(LIMITS.pointsMax, {
+      error: `A checkpoint is worth at most ${LIMITS.pointsMax} points.`,
+    }),
   attempts: z
     .number({ error: 'Expected the number of attempts.' })
     .int({ error: 'Attempts is a whole number.' })
@@ -161,7 +170,14 @@ export const ShortTextCheckpointSchema = z.object({
 // ---- equation card --------------------------------------------------------------------------
 
 /** Field models a live equation card can run (core/lessons/models lists inputs, output and plot). */
-export const MODEL_IDS = ['coil-on-axis', 'helmholtz-on-axis', 'solenoid-on-axis', 'straight-wire', 'dipole-on-axis', 'needle-deflection'] as const;
+export const MODEL_IDS = [
+  'coil-on-axis',
+  'helmholtz-on-axis',
+  'solenoid-on-axis',
+  'straight-wire',
+  'dipole-on-axis',
+  'needle-deflection',
+] as const;
 export const ModelIdSchema = z.enum(MODEL_IDS, { error: 'Choose one of the models.' });
 export type ModelId = z.infer<typeof ModelIdSchema>;
 
@@ -300,7 +316,13 @@ export type Checkpoint = z.infer<typeof CheckpointSchema>;
 export type CheckpointOf<K extends CheckpointKind> = Extract<Checkpoint, { kind: K }>;
 
 /** Kinds a student answers (and that can carry points). */
-export const ANSWERED_KINDS = ['multiple-choice', 'numeric', 'short-text', 'sign', 'prediction'] as const satisfies readonly CheckpointKind[];
+export const ANSWERED_KINDS = [
+  'multiple-choice',
+  'numeric',
+  'short-text',
+  'sign',
+  'prediction',
+] as const satisfies readonly CheckpointKind[];
 export type AnsweredCheckpoint = CheckpointOf<(typeof ANSWERED_KINDS)[number]>;
 export function isAnswered(checkpoint: Checkpoint): checkpoint is AnsweredCheckpoint {
   return (ANSWERED_KINDS as readonly string[]).includes(checkpoint.kind);

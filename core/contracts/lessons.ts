@@ -21,7 +21,10 @@ export const LessonSettingsSchema = z.object({
   description: markdown(LIMITS.lessonDescriptionMax, 'the description'),
   tags: z.array(TagSchema).max(LIMITS.lessonTagsMax, { error: `At most ${LIMITS.lessonTagsMax} tags.` }),
   /** Free text: "Year 10", "Introductory college". */
-  level: z.string().trim().max(LIMITS.lessonLevelMax, { error: `A level has at most ${LIMITS.lessonLevelMax} characters.` }),
+  level: z
+    .string()
+    .trim()
+    .max(LIMITS.lessonLevelMax, { error: `A level has at most ${LIMITS.lessonLevelMax} characters.` }),
   /** Shown to students before the video starts. */
   safetyNotes: markdown(LIMITS.safetyNotesMax, 'the safety notes'),
   /** Closest two checkpoints may be. */
@@ -152,7 +155,10 @@ export type LessonUpdate = z.infer<typeof LessonUpdateSchema>;
 
 export const PublishSchema = z.object({
   revision: z.number().int().min(0),
-  note: z.string().trim().max(LIMITS.versionNoteMax, { error: `A note has at most ${LIMITS.versionNoteMax} characters.` }),
+  note: z
+    .string()
+    .trim()
+    .max(LIMITS.versionNoteMax, { error: `A note has at most ${LIMITS.versionNoteMax} characters.` }),
 });
 export type Publish = z.infer<typeof PublishSchema>;
 

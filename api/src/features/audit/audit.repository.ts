@@ -1,7 +1,17 @@
 import type { Db } from '../../db/knex';
 
 export type AuditAction =
-  'sign_in' | 'sign_in_refused' | 'sign_out' | 'invitation_sent' | 'roles_changed' | 'department_changed' | 'joined_class';
+  | 'sign_in'
+  | 'sign_in_refused'
+  | 'sign_out'
+  | 'invitation_sent'
+  | 'roles_changed'
+  | 'department_changed'
+  | 'joined_class'
+  | LessonAuditAction;
+
+/** Lesson events; subject_id names users only, so the lesson's id and title go in `data`. */
+export type LessonAuditAction = 'lesson_published' | 'lesson_shared' | 'lesson_unshared' | 'lesson_deleted';
 
 export interface AuditEvent {
   schoolId: string | null;

@@ -20,16 +20,14 @@ async function department() {
   const physics = await buildDepartment(t.db, school.id);
   const owner = await member(t, ['teacher'], { schoolId: school.id, departmentId: physics.id });
   const recording = await readyRecording(t, owner);
-  await t
-    .db('recording_captions')
-    .insert({
-      recording_id: recording.id,
-      language: 'en',
-      label: 'English',
-      is_default: true,
-      vtt: 'WEBVTT\n\n00:01.000 --> 00:02.000\nHello\n',
-      cue_count: 1,
-    });
+  await t.db('recording_captions').insert({
+    recording_id: recording.id,
+    language: 'en',
+    label: 'English',
+    is_default: true,
+    vtt: 'WEBVTT\n\n00:01.000 --> 00:02.000\nHello\n',
+    cue_count: 1,
+  });
   const lesson = await createLesson(owner.client, recording.id);
   const content: LessonContent = {
     ...lesson.draft,

@@ -11,12 +11,12 @@ describe('section base', () => {
     expect(sectionBaseOf('/admin/people')).toBe('/teacher');
   });
 
-  it('keeps lesson links inside the section; the studio and create pages are the teacher’s', () => {
+  it('keeps lesson links inside the section; a substitute edits their own copies in their section; creating is the teacher’s', () => {
     const to = lessonPaths('/substitute');
     expect(to.list).toBe('/substitute/lessons');
     expect(to.overview('l1')).toBe('/substitute/lessons/l1');
     expect(to.preview('l1')).toBe('/substitute/lessons/l1/preview');
-    expect(to.studio('l1')).toBe('/teacher/lessons/l1/studio');
+    expect(to.studio('l1')).toBe('/substitute/lessons/l1/studio');
     expect(to.create('r 1')).toBe('/teacher/lessons/new?recording=r%201');
   });
 });

@@ -18,10 +18,7 @@ export function ProblemList({ lessonId, problems, content, canEdit, label }: Pro
         return (
           <li key={`${problem.path}:${problem.message}`}>
             {canEdit ? (
-              <Link
-                to={`${studioPath(lessonId)}?problem=${encodeURIComponent(problem.path)}`}
-                className="font-bold text-copper underline"
-              >
+              <Link to={`${studioPath(lessonId)}?problem=${encodeURIComponent(problem.path)}`} className="font-bold text-copper underline">
                 {place}
               </Link>
             ) : (
