@@ -215,3 +215,44 @@ describe('the lesson studio', () => {
     await second.close();
   });
 });
+
+describe('a crowded timeline', () => {
+  it('keeps every marker reachable when checkpoints sit half a second apart', async () => {
+    const page = await openPage({ width: 1280, height: 800 });
+    await signInWithPicker(page, TEACHER);
+    const recordingId = await readyRecordingId(page, 'Demo: magnet through a copper tube');
+    const created = await apiAs<{ id: string; revision: number; draft: { checkpoints: unknown[] } & Record<string, unknown> }>(
+      page,
+      'POST',
+      '/lessons',
+      { recordingId, title: 'E2E: crowded timeline', description: '', tags: [], level: '', safetyNotes: '' },
+    );
+    // Notes are the simplest complete checkpoint; the first test covers every kind's marker.
+    const checkpoints = Array.from({ length: 18 }, (_, index) => ({
+      key: `crowd${String(index).padStart(4, '0')}`,
+      atMs: 500 + index * 500,
+      label: `Remark ${index + 1}`,
+      behaviour: 'aside',
+      kind: 'note',
+      tone: 'remark',
+      body: `Remark ${index + 1}`,
+    }));
+    const saved = await apiAs(page, 'PUT', `/lessons/${created.body.id}/draft`, {
+      revision: created.body.revision,
+      content: { ...created.body.draft, checkpoints },
+    });
+    expect(saved.status).toBe(200);
+    await page.goto(`${baseUrl}/teacher/lessons/${created.body.id}/studio`);
+    const markers = page.getByRole('region', { name: 'Timeline' }).getByRole('button', { name: /^Note: / });
+    await markers.first().waitFor();
+    expect(await markers.count()).toBe(18);
+    // Arrow keys walk the markers in time order.
+    await markers.first().focus();
+    await page.keyboard.press('ArrowRight');
+    await page
+      .getByRole('button', { name: /^Note: .*, at 0:01\.000/ })
+      .and(page.locator(':focus'))
+      .waitFor();
+    await screenshot(page, 'studio-timeline-crowded');
+  });
+});

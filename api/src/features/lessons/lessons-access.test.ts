@@ -177,6 +177,13 @@ describe('who may see, change and copy a lesson', () => {
     const stored = await t.db('lessons').where({ id: duplicate.id }).first('copied_from_id', 'department_id', 'school_id');
     expect(stored).toEqual({ copied_from_id: lesson.id, department_id: null, school_id: school.id });
     expectCopied(duplicate.draft, content);
+    // The copy is the substitute's own: they open it, edit it and find it in their list.
+    const own = (await substitute.client.get(`/api/lessons/${duplicate.id}`)).body;
+    expect(own.canEdit).toBe(true);
+    const edited = { ...duplicate.draft, settings: { ...duplicate.draft.settings, title: 'Cover lesson: flat coil' } };
+    expect((await substitute.client.send('put', `/api/lessons/${duplicate.id}/draft`, { revision: 0, content: edited })).status).toBe(200);
+    const mine = (await substitute.client.get('/api/lessons?owner=me')).body;
+    expect(mine.lessons.map((l: { title: string }) => l.title)).toEqual(['Cover lesson: flat coil']);
   });
 
   it('a teacher’s copy of a colleague’s shared lesson lands in their department with new keys; the original is untouched', async () => {
