@@ -197,6 +197,15 @@ describe('lesson overview', { timeout: 20_000 }, () => {
     expect(screen.getByRole('button', { name: 'Publish version 2' })).toBeInTheDocument();
   });
 
+  it('offers no publishing while the newest version is up to date', async () => {
+    signInAs(buildMe(['teacher']));
+    const lesson = buildLesson({ state: 'published', publishedVersion: 1, unpublishedChanges: false });
+    mockLesson(() => lesson);
+    renderLessonRoute(`/teacher/lessons/${lesson.id}`);
+    expect(await screen.findByText(/Version 1 is up to date/)).toBeInTheDocument();
+    expect(screen.queryByRole('button', { name: /^Publish version/ })).not.toBeInTheDocument();
+  });
+
   it('a viewer gets preview, duplicate and export, and nothing that changes the lesson', async () => {
     signInAs(buildMe(['substitute']));
     const lesson = buildLesson({

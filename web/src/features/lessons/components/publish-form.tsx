@@ -66,28 +66,32 @@ export function PublishForm({ lesson }: { lesson: LessonDto }) {
           />
         </Banner>
       ) : null}
-      <Field
-        label="Note for this version"
-        hint="Optional: what changed and why, for you and your colleagues (students do not see it)."
-        error={errors.note?.message}
-      >
-        {(control) => <Textarea {...control} {...form.register('note')} rows={2} />}
-      </Field>
-      <FormFooter
-        label={lesson.publishedVersion === null ? 'Publish version 1' : `Publish version ${lesson.publishedVersion + 1}`}
-        icon={CheckIcon}
-        busy={mutation.isPending}
-        success={
-          published
-            ? {
-                title: `Version ${published.number} published`,
-                body: `${plural(published.checkpointCount, 'checkpoint')}; the versions list below shows what changed.`,
-              }
-            : null
-        }
-        errorTitle="Not published"
-        error={banner}
-      />
+      {upToDate && !published ? null : (
+        <>
+          <Field
+            label="Note for this version"
+            hint="Optional: what changed and why, for you and your colleagues (students do not see it)."
+            error={errors.note?.message}
+          >
+            {(control) => <Textarea {...control} {...form.register('note')} rows={2} />}
+          </Field>
+          <FormFooter
+            label={lesson.publishedVersion === null ? 'Publish version 1' : `Publish version ${lesson.publishedVersion + 1}`}
+            icon={CheckIcon}
+            busy={mutation.isPending}
+            success={
+              published
+                ? {
+                    title: `Version ${published.number} published`,
+                    body: `${plural(published.checkpointCount, 'checkpoint')}; the versions list below shows what changed.`,
+                  }
+                : null
+            }
+            errorTitle="Not published"
+            error={banner}
+          />
+        </>
+      )}
     </form>
   );
 }
