@@ -2,9 +2,10 @@ import type { SVGProps } from 'react';
 
 // Pinfield's own line icons: 24-unit grid, drawn with the current text colour, hidden from screen readers
 // (the text beside each icon carries the meaning).
-type IconProps = SVGProps<SVGSVGElement>;
+export type IconProps = SVGProps<SVGSVGElement>;
 
-function Svg({ children, ...props }: IconProps) {
+/** The frame every line icon is drawn in (also used by the studio's checkpoint-kind icons). */
+export function Svg({ children, ...props }: IconProps) {
   return (
     <svg
       viewBox="0 0 24 24"

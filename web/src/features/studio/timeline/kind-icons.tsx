@@ -1,27 +1,8 @@
-import type { SVGProps } from 'react';
 import type { CheckpointKind } from '@core/contracts';
+import { Svg, type IconProps } from '@/components/ui/icons';
 
 // One drawn icon per checkpoint kind (24-unit grid, current text colour). Each kind also has its short
 // label beside the icon, so no kind is told apart by colour or shape alone.
-type IconProps = SVGProps<SVGSVGElement>;
-
-function Svg({ children, ...props }: IconProps) {
-  return (
-    <svg
-      viewBox="0 0 24 24"
-      fill="none"
-      stroke="currentColor"
-      strokeWidth={2}
-      strokeLinecap="round"
-      strokeLinejoin="round"
-      aria-hidden="true"
-      focusable="false"
-      {...props}
-    >
-      {children}
-    </svg>
-  );
-}
 
 /** Three choices, the first one ticked. */
 const ChoiceIcon = (p: IconProps) => (
