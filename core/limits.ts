@@ -45,4 +45,8 @@ export const LIMITS = {
   lessonImageBytesMax: 5 * 1024 * 1024,
   lessonFileBytesMax: 1024 * 1024,
   answerTextMax: 500,
+  /** Intervals in one viewing report (the player sends every ~10 s). */
+  viewingIntervalsMax: 200,
+  /** An answer queued offline before the due time is accepted when it arrives within this long. */
+  offlineGraceMs: 24 * 60 * 60 * 1000,
 } as const;

@@ -8,3 +8,5 @@ export * from './recordings';
 export * from './checkpoints';
 export * from './lessons';
 export * from './student-checkpoints';
+export * from './assignments';
+export * from './watch';

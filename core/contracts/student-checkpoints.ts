@@ -42,6 +42,10 @@ export const StudentCheckpointSchema = z.discriminatedUnion('kind', [
     /** Placeholders replaced by this student's values ('a = 4.5 cm'). */
     prompt: z.string(),
     askedUnit: z.string(),
+    /** The asked unit's dimension ('magnetic-field'): the input checks what is typed before sending. */
+    dimension: z.string(),
+    /** This student's drawn values as written in the prompt, by variable name ('4.5 cm'). */
+    values: z.record(z.string(), z.string()),
   }),
   z.object({ ...base, ...answered, kind: z.literal('short-text'), prompt: z.string() }),
   z.object({

@@ -3,6 +3,7 @@ import type { CheckpointAnswer } from '../contracts/student-checkpoints';
 import { GradingSetupError } from '../physics/grading/compile-spec';
 import { gradeNumeric } from '../physics/grading/grade-numeric';
 import { PhysicsError } from '../physics/units/errors';
+import type { VariableValues } from '../physics/units/types';
 import { parseQuantity } from '../physics/units/parse-quantity';
 import { signChoiceLabel } from './choice-labels';
 import { AnswerMismatchError, CheckpointNotGradableError } from './grade-errors';
@@ -23,6 +24,8 @@ export interface Verdict {
   answerText: string;
   /** Shown with the reveal; for a prediction this includes what happens at the reveal time. */
   explanation: string;
+  /** A numeric answer's value in SI units, as read (stored with the response). */
+  parsedSi?: number | null;
 }
 
 type AnswerOf<K extends CheckpointAnswer['kind']> = Extract<CheckpointAnswer, { kind: K }>;
@@ -70,7 +73,7 @@ export function gradeMultipleChoice(checkpoint: CheckpointOf<'multiple-choice'>,
 export function gradeNumericAnswer(
   checkpoint: CheckpointOf<'numeric'>,
   answer: AnswerOf<'numeric'>,
-  options: { seed: string; locale?: string },
+  options: { seed: string; locale?: string; values?: VariableValues },
 ): Verdict {
   const asked = readAskedUnit(checkpoint.askedUnit);
   if (!asked.ok) throw new CheckpointNotGradableError(`The asked unit cannot be read: ${asked.message}`);
@@ -82,7 +85,7 @@ export function gradeNumericAnswer(
   }
   let grade;
   try {
-    const values = drawnValuesFor(checkpoint, options.seed);
+    const values = options.values ?? drawnValuesFor(checkpoint, options.seed);
     grade = gradeNumeric(toNumericSpec(checkpoint), text, options.locale === undefined ? { values } : { values, locale: options.locale });
   } catch (error) {
     if (error instanceof GradingSetupError || error instanceof PhysicsError) {
@@ -102,6 +105,7 @@ export function gradeNumericAnswer(
     invalid: false,
     answerText,
     explanation: checkpoint.explanation,
+    parsedSi: grade.parsed?.value ?? null,
   };
 }
 

@@ -2,6 +2,7 @@ import { CHECKPOINT_KIND_LABELS, isAnswered, type Checkpoint } from '../contract
 import type { CheckpointAnswer, CheckpointGradeDto } from '../contracts/student-checkpoints';
 import { gradeMultipleChoice, gradeNumericAnswer, gradePrediction, gradeShortText, gradeSign, type Verdict } from './grade-answers';
 import { AnswerMismatchError } from './grade-errors';
+import type { VariableValues } from '../physics/units/types';
 
 export { AnswerMismatchError, CheckpointNotGradableError } from './grade-errors';
 
@@ -12,6 +13,15 @@ export interface GradeOptions {
   locale?: string;
   /** 1 for the first try. Earlier tries are taken as wrong: a right answer ends the checkpoint. */
   attempt: number;
+  /** The values stored for this student at this (numeric) checkpoint; drawn from `seed` when absent. */
+  values?: VariableValues;
+}
+
+/** A graded attempt with what the record keeps besides the reply. */
+export interface GradedAttempt {
+  grade: CheckpointGradeDto;
+  /** A numeric answer's value in SI units; null otherwise or when it could not be read. */
+  parsedSi: number | null;
 }
 
 function verdictFor(checkpoint: Checkpoint, answer: CheckpointAnswer, options: GradeOptions): Verdict {
@@ -44,13 +54,18 @@ function verdictFor(checkpoint: Checkpoint, answer: CheckpointAnswer, options: G
  * and CheckpointNotGradableError for a draft checkpoint that cannot be graded yet.
  */
 export function gradeCheckpoint(checkpoint: Checkpoint, answer: CheckpointAnswer, options: GradeOptions): CheckpointGradeDto {
+  return gradeAttempt(checkpoint, answer, options).grade;
+}
+
+/** gradeCheckpoint with the parsed SI value the response record stores. */
+export function gradeAttempt(checkpoint: Checkpoint, answer: CheckpointAnswer, options: GradeOptions): GradedAttempt {
   const verdict = verdictFor(checkpoint, answer, options);
   if (!isAnswered(checkpoint)) throw new AnswerMismatchError('This checkpoint takes no answer.');
   const attempt = Math.max(1, Math.floor(options.attempt));
   const used = verdict.invalid ? attempt - 1 : attempt;
   const wrongSoFar = verdict.invalid || verdict.correct !== false ? attempt - 1 : attempt;
   const finished = !verdict.invalid && (verdict.correct === true || attempt >= checkpoint.attempts);
-  return {
+  const grade: CheckpointGradeDto = {
     correct: verdict.invalid ? false : verdict.correct,
     score: verdict.invalid ? 0 : verdict.score,
     feedback: verdict.feedback,
@@ -60,4 +75,5 @@ export function gradeCheckpoint(checkpoint: Checkpoint, answer: CheckpointAnswer
     hints: checkpoint.hints.slice(0, Math.max(0, wrongSoFar)),
     reveal: finished ? { answer: verdict.answerText, explanation: verdict.explanation } : null,
   };
+  return { grade, parsedSi: verdict.parsedSi ?? null };
 }

@@ -13,6 +13,8 @@ export interface StudentViewOptions {
   seed: string;
   /** The school's BCP 47 locale: drawn values are written with its decimal sign. */
   locale?: string;
+  /** Values stored for this student, by checkpoint key (the watch page); others are drawn from `seed`. */
+  drawn?: Readonly<Record<string, VariableValues>>;
 }
 
 /** A drawn value as the student reads it: '4,5 cm' in a decimal-comma locale. */
@@ -21,17 +23,20 @@ function localValue(value: number | string, comma: boolean): string {
   return comma ? text.replace(/^(-?\d+)\.(\d)/, '$1,$2') : text;
 }
 
-/** The prompt with this student's values; a draft whose variables cannot be drawn keeps its placeholders. */
-function numericPrompt(checkpoint: Extract<Checkpoint, { kind: 'numeric' }>, options: StudentViewOptions): string {
+/** The prompt with this student's values, and the values as written; a draft whose variables cannot be drawn keeps its placeholders. */
+function numericPrompt(
+  checkpoint: Extract<Checkpoint, { kind: 'numeric' }>,
+  options: StudentViewOptions,
+): { prompt: string; values: Record<string, string> } {
   let drawn: VariableValues;
   try {
-    drawn = drawnValuesFor(checkpoint, options.seed);
+    drawn = options.drawn?.[checkpoint.key] ?? drawnValuesFor(checkpoint, options.seed);
   } catch {
-    return checkpoint.prompt;
+    return { prompt: checkpoint.prompt, values: {} };
   }
   const comma = usesDecimalComma(options.locale);
   const values = Object.fromEntries(Object.entries(drawn).map(([name, value]) => [name, localValue(value, comma)]));
-  return fillPlaceholders(checkpoint.prompt, values);
+  return { prompt: fillPlaceholders(checkpoint.prompt, values), values };
 }
 
 /** One checkpoint without its answer key: only the fields the player needs, listed one by one. */
@@ -69,8 +74,9 @@ export function toStudentCheckpoint(checkpoint: Checkpoint, options: StudentView
       return {
         ...answered,
         kind: 'numeric',
-        prompt: numericPrompt(checkpoint, options),
+        ...numericPrompt(checkpoint, options),
         askedUnit: unit.ok ? unit.display : checkpoint.askedUnit,
+        dimension: unit.ok ? unit.dimension : '',
       };
     }
     case 'short-text':

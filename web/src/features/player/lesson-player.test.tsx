@@ -139,6 +139,8 @@ describe('LessonPlayer', { timeout: 20_000 }, () => {
       kind: 'numeric',
       prompt: 'Find the field at the centre.',
       askedUnit: 'mT',
+      dimension: 'magnetic-field',
+      values: {},
     };
     const onAnswer = vi
       .fn<AnswerSender>()
