@@ -8,7 +8,7 @@ import { server } from '@/testing/mocks/server';
 import { renderApp, signInAs } from '@/testing/test-utils';
 
 describe('role homes', () => {
-  it('teacher: classes with student counts and join codes, and what will appear under lessons', async () => {
+  it('teacher: classes with student counts and join codes, and where lessons are built and assigned', async () => {
     signInAs(buildMe(['teacher']));
     server.use(
       http.get('/api/teacher/classes', () =>
@@ -20,7 +20,7 @@ describe('role homes', () => {
     expect(card).toHaveTextContent('27 students enrolled');
     expect(card).toHaveTextContent('QW3RTY9P');
     expect(within(card as HTMLElement).getByRole('button', { name: 'Copy the join code of 10B Physics' })).toBeInTheDocument();
-    expect(screen.getByText('No lessons yet')).toBeInTheDocument();
+    expect(screen.getByRole('link', { name: 'Lessons page' })).toHaveAttribute('href', '/teacher/lessons');
   });
 
   it('teacher: says how classes arrive when there are none', async () => {
@@ -35,6 +35,7 @@ describe('role homes', () => {
     signInAs(buildMe(['student']));
     let joined = false;
     server.use(
+      http.get('/api/student/assignments', () => HttpResponse.json({ assignments: [], serverTime: '2026-12-01T10:00:00.000Z' })),
       http.get('/api/student/classes', () => HttpResponse.json({ classes: joined ? [buildStudentClass({ name: '10B Physics' })] : [] })),
       http.post('/api/student/enrolments', async ({ request }) => {
         expect(await request.json()).toEqual({ code: 'QW3RTY9P' });
@@ -53,6 +54,7 @@ describe('role homes', () => {
   it('student: a code no class has is explained next to the field', async () => {
     signInAs(buildMe(['student']));
     server.use(
+      http.get('/api/student/assignments', () => HttpResponse.json({ assignments: [], serverTime: '2026-12-01T10:00:00.000Z' })),
       http.get('/api/student/classes', () => HttpResponse.json({ classes: [] })),
       http.post('/api/student/enrolments', () => apiError(404, 'not_found', 'No class in your school has the code QW3RTY9P.')),
     );

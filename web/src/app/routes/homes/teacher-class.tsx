@@ -8,6 +8,7 @@ import { paths } from '@/config/paths';
 import { useClass } from '@/features/classes/api/get-class';
 import { ClassRosterTable } from '@/features/classes/components/class-roster-table';
 import { JoinCode } from '@/features/classes/components/join-code';
+import { ClassAssignmentsSection } from '../assignments/class-assignments-section';
 import { useSchoolClock } from './use-school-clock';
 
 /** One of the teacher's classes: its join code and the students enrolled. */
@@ -29,6 +30,7 @@ export default function TeacherClassRoute() {
           <div className="mb-6">
             <JoinCode code={detail.data.joinCode} className={detail.data.name} />
           </div>
+          <ClassAssignmentsSection classId={detail.data.id} classTitle={detail.data.name} locale={clock.locale} />
           <h2 className="mb-3 text-2xl">Students ({detail.data.students.length})</h2>
           <ClassRosterTable students={detail.data.students} clock={clock} caption={`Students in ${detail.data.name}`} />
         </>

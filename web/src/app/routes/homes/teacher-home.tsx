@@ -1,7 +1,5 @@
 import { Link } from 'react-router-dom';
-import { EmptyState } from '@/components/ui/empty-state';
 import { ErrorBanner } from '@/components/ui/error-banner';
-import { FieldLinesIcon } from '@/components/ui/icons';
 import { PageHeader } from '@/components/ui/page-header';
 import { Loading } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
@@ -9,7 +7,7 @@ import { useSignedInMe } from '@/features/auth/components/me-context';
 import { useTeacherClasses } from '@/features/classes/api/get-teacher-classes';
 import { TeacherClassList } from '@/features/classes/components/teacher-class-list';
 
-/** A teacher's home: their classes with join codes, and where their lessons will be. */
+/** A teacher's home: their classes with join codes, and where their lessons and recordings are. */
 export default function TeacherHomeRoute() {
   const me = useSignedInMe();
   const classes = useTeacherClasses();
@@ -40,10 +38,14 @@ export default function TeacherHomeRoute() {
         <h2 id="lessons-heading" className="text-2xl">
           Your lessons
         </h2>
-        <EmptyState icon={<FieldLinesIcon className="size-8" />} title="No lessons yet">
-          The lessons you build from your recordings by pinning checkpoints on the timeline will appear here, ready to assign to the classes
-          above. The lesson builder is not part of this version of Pinfield yet.
-        </EmptyState>
+        <p>
+          Build lessons from your recordings by pinning checkpoints on the timeline, publish them, and assign a version to your classes
+          from the{' '}
+          <Link to={paths.lessons.list(paths.teacher.home)} className="font-bold text-copper underline">
+            Lessons page
+          </Link>
+          . Each class above lists the lessons assigned to it.
+        </p>
       </section>
     </>
   );

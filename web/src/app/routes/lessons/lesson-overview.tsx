@@ -19,6 +19,7 @@ import { VersionList } from '@/features/lessons/components/version-list';
 import { versionText } from '@/features/lessons/lesson-labels';
 import { lessonPaths, useSectionBase } from '@/features/lessons/section-base';
 import { formatDateTime, type SchoolClock } from '@/lib/format';
+import { LessonAssignCard } from '../assignments/lesson-assign-card';
 import { useSchoolClock } from '../homes/use-school-clock';
 
 /** One lesson: what it is, its versions and files; its owner also publishes, shares, archives or deletes it here. */
@@ -58,6 +59,7 @@ export default function LessonOverviewRoute() {
           <div className="grid gap-6 lg:grid-cols-[minmax(0,3fr)_minmax(0,2fr)]">
             <LessonSummary lesson={lesson} />
             <div className="flex flex-col gap-6">
+              {base === '/teacher' ? <LessonAssignCard lesson={lesson} /> : null}
               {lesson.canEdit ? (
                 <>
                   <Card aria-labelledby="publish-heading">
