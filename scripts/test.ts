@@ -100,6 +100,7 @@ async function e2ePhase(cluster: Cluster, app: Env): Promise<void> {
         E2E_INBOX_URL: `http://${HOST}:${ports.mailWeb}`,
         E2E_OIDC_URL: `http://${HOST}:${ports.oidc}`,
         E2E_CDP_PORT: String(ports.cdp),
+        E2E_DATABASE_URL: app.DATABASE_URL ?? '',
       }),
     );
     await appChild.stop();

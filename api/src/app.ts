@@ -10,6 +10,7 @@ import type { Mailer } from './mail/mailer';
 import type { ObjectStorage } from './storage/object-storage';
 import type { JobQueue } from './jobs/job-queue';
 import { createSessionMiddleware } from './auth/session';
+import { createCacheInvalidation } from './auth/cache-invalidation';
 import { createPassport } from './auth/google';
 import { loadActor } from './middleware/load-actor';
 import { apiNotFound, errorHandler } from './middleware/error-handler';
@@ -38,6 +39,17 @@ import { lessonTransferRoutes } from './features/lessons/lesson-transfer.routes'
 import { lessonVttRoutes } from './features/lessons/lesson-vtt.routes';
 import { createLessonImagesService } from './features/lesson-images/lesson-images.service';
 import { lessonImagesRoutes } from './features/lesson-images/lesson-images.routes';
+import { createAssignmentContexts } from './features/responses/assignment-context';
+import { createResponsesService } from './features/responses/responses.service';
+import { responsesRoutes } from './features/responses/responses.routes';
+import { createSubmitRateLimit } from './features/responses/submit-rate-limit';
+import { createMediaUrls } from './features/recordings/media-urls';
+import { createRecordingMediaService } from './features/recordings/recording-media.service';
+import { createWatchService } from './features/watch/watch.service';
+import { watchRoutes } from './features/watch/watch.routes';
+import { beaconBody, csrfTokenOf, VIEWING_BEACON_ROUTE } from './features/watch/viewing-beacon';
+import { createAssignmentsService } from './features/assignments/assignments.service';
+import { assignmentsRoutes } from './features/assignments/assignments.routes';
 import { webApp } from './web-app';
 
 export interface AppDeps {
@@ -64,7 +76,10 @@ export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAc
   app.disable('x-powered-by');
   app.set('trust proxy', trustProxy(env.TRUST_PROXY));
 
-  const csrf = csrfSync({ getTokenFromRequest: (req) => req.get('x-csrf-token') });
+  // The header, except for the viewing beacon (sendBeacon cannot set one): its token is in the body.
+  const csrf = csrfSync({ getTokenFromRequest: csrfTokenOf });
+  // Sessions, actors and assignment contexts are cached per process; every change reaches every process at once.
+  const invalidation = createCacheInvalidation({ pool, logger });
   const passport = createPassport(env);
   const limits = createSignInLimits(db, env.SIGNIN_LIMIT_PER_EMAIL, env.SIGNIN_LIMIT_PER_ADDRESS);
   const auth = createAuthService({ db, mailer, limits, publicUrl: env.PUBLIC_URL, logger });
@@ -114,10 +129,14 @@ export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAc
   // A whole lesson draft or lesson file may pass the general limit (LIMITS.lessonFileBytesMax and up to 200 checkpoints).
   api.use(['/lessons/import', '/lessons/:lessonId/draft'], express.json({ limit: LESSON_BODY_LIMIT }));
   api.use(express.json({ limit: env.BODY_LIMIT }));
-  api.use(createSessionMiddleware({ pool, secret: env.SESSION_SECRET, secure: env.PUBLIC_URL.startsWith('https://') }));
+  api.use(VIEWING_BEACON_ROUTE, beaconBody(env.BODY_LIMIT));
+  api.use(createSessionMiddleware({ pool, secret: env.SESSION_SECRET, secure: env.PUBLIC_URL.startsWith('https://'), invalidation }));
   api.use(passport.initialize());
   api.use(csrf.csrfSynchronisedProtection);
-  api.use(loadActor(db));
+  api.use(loadActor(db, invalidation));
+  const contexts = createAssignmentContexts({ db, invalidation });
+  // The busiest route, first: a request does not walk every other router's routes to reach it.
+  api.use(responsesRoutes(createResponsesService({ db, pool, contexts, rateLimit: createSubmitRateLimit(env.SUBMIT_RATE_PER_MINUTE) })));
 
   api.use('/auth', authRoutes({ db, auth, passport, csrf, config: authConfig }));
   api.use('/me', meRoutes({ csrf }));
@@ -133,6 +152,10 @@ export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAc
   api.use(lessonTransferRoutes(createLessonTransferService({ db, lessons: lessons.lessons })));
   api.use(lessonVttRoutes({ db }));
   api.use(lessonImagesRoutes(createLessonImagesService({ db, storage })));
+  const mediaUrls = createMediaUrls(storage, env.PLAYBACK_URL_MINUTES);
+  const recordingMedia = createRecordingMediaService({ db, storage, urls: mediaUrls });
+  api.use(watchRoutes(createWatchService({ db, contexts, media: recordingMedia, urls: mediaUrls }), { publicUrl: env.PUBLIC_URL }));
+  api.use(assignmentsRoutes(createAssignmentsService({ db, contexts })));
   api.use(apiNotFound);
 
   app.use('/api', api);

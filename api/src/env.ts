@@ -78,6 +78,8 @@ export const envSchema = z.object({
     .max(1439, { error: 'expected at most 1439 minutes (just under a day)' })
     .default(60),
   FFMPEG_NICE: z.coerce.number({ error: 'expected a niceness from 0 to 19' }).int().min(0).max(19).default(10),
+  /** Answers one student may send per minute (counted per API process). */
+  SUBMIT_RATE_PER_MINUTE: z.coerce.number({ error: 'expected a whole number of answers per minute' }).int().min(1).default(60),
 });
 
 export type Env = z.infer<typeof envSchema>;

@@ -75,6 +75,8 @@ export type StudentCheckpoint = z.infer<typeof StudentCheckpointSchema>;
 
 export const StudentLessonViewSchema = z.object({
   title: z.string(),
+  /** The school's BCP 47 locale: answers are read with its decimal sign, and the input reads them the same way. */
+  locale: z.string(),
   safetyNotes: z.string(),
   chapters: z.array(ChapterSchema),
   /** Sorted by time. */

@@ -130,7 +130,7 @@ export const ViewingReportSchema = z.object({
 export type ViewingReport = z.infer<typeof ViewingReportSchema>;
 
 /** The same report through navigator.sendBeacon, which cannot set headers: the CSRF token travels in the body. */
-export const ViewingBeaconSchema = ViewingReportSchema.extend({ csrfToken: z.string().min(1).max(200) });
+export const ViewingBeaconSchema = ViewingReportSchema.extend({ csrfToken: z.string().min(1).max(512) });
 export type ViewingBeacon = z.infer<typeof ViewingBeaconSchema>;
 
 export const ViewingResultDtoSchema = z.object({ completion: CompletionDtoSchema, serverTime: instant });

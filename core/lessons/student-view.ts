@@ -118,5 +118,5 @@ export function toStudentView(content: LessonContent, options: StudentViewOption
   const chapters = [...content.chapters]
     .sort((a, b) => a.startMs - b.startMs)
     .map((c) => ({ key: c.key, title: c.title, startMs: c.startMs, endMs: c.endMs }));
-  return { title: content.settings.title, safetyNotes: content.settings.safetyNotes, chapters, checkpoints };
+  return { title: content.settings.title, locale: options.locale ?? 'en-GB', safetyNotes: content.settings.safetyNotes, chapters, checkpoints };
 }

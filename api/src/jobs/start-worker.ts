@@ -10,6 +10,7 @@ import type { PgBossJobQueue } from './pg-boss-queue';
 import { processRecording, type ProcessMedia, type ProcessingOutcome } from './process-recording';
 import { markProcessingGaveUp } from './processing-gave-up';
 import { removeStaleTempFolders } from './temp-folders';
+import { startRollupLoop } from '../features/rollups/rollup-loop';
 
 export interface WorkerOptions {
   queue: PgBossJobQueue;
@@ -26,6 +27,8 @@ export interface WorkerOptions {
   pollingIntervalSeconds?: number;
   /** On stop, how long the running job may still finish before ffmpeg is aborted. */
   shutdownGraceMs?: number;
+  /** How often the rollups for results are brought up to date (default 5 s). */
+  rollupIntervalMs?: number;
 }
 
 export interface RecordingWorker {
@@ -100,6 +103,7 @@ export async function startWorker(options: WorkerOptions): Promise<RecordingWork
     cleanAbandonedUploads({ db, storage, logger, olderThanHours: options.uploadAbandonHours }),
   );
   await boss.schedule(QUEUES.cleanUploads, CLEAN_UPLOADS_CRON, {}, { tz: 'UTC' });
+  const rollups = startRollupLoop({ db, logger, ...(options.rollupIntervalMs ? { intervalMs: options.rollupIntervalMs } : {}) });
 
   logger.info(
     { nice: options.nice, timeoutMinutes: settings.expireInSeconds / 60, retries: settings.retryLimit },
@@ -115,6 +119,7 @@ export async function startWorker(options: WorkerOptions): Promise<RecordingWork
           boss.offWork(QUEUES.processRecording),
           boss.offWork(QUEUES.processingFailed),
           boss.offWork(QUEUES.cleanUploads),
+          rollups.stop(),
         ]);
         const running = current;
         if (running) {

@@ -85,13 +85,19 @@ export function studentEmail(name: string): string {
   return `${name.toLowerCase().replace(/[^a-z]+/g, '.')}@fernhollow.example`;
 }
 
+const studentAccount = (name: string, className: string): DemoPerson => ({
+  email: studentEmail(name),
+  name,
+  roles: ['student'] as Role[],
+  label: `Student, ${className}`,
+});
+
+/** Ada's class, which seed step 004 gives the demo assignment: every student of it is offered, so the class can complete it. */
+export const DEMO_ASSIGNED_CLASS = DEMO_CLASSES[0];
+
 /** The accounts the sign-in stand-in offers and `npm start` prints. */
 export const demoAccounts: DemoPerson[] = [
   ...DEMO_STAFF,
-  ...DEMO_CLASSES.slice(0, 2).map((cls): DemoPerson => ({
-    email: studentEmail(cls.students[0]),
-    name: cls.students[0],
-    roles: ['student'] as Role[],
-    label: `Student, ${cls.name}`,
-  })),
+  ...DEMO_ASSIGNED_CLASS.students.map((name) => studentAccount(name, DEMO_ASSIGNED_CLASS.name)),
+  ...DEMO_CLASSES.slice(1, 2).map((cls) => studentAccount(cls.students[0], cls.name)),
 ];

@@ -3,6 +3,7 @@ import { createKnex } from '../db/knex';
 import { seedPeopleAndClasses } from './steps/001-people-and-classes';
 import { seedDemoRecordings } from './steps/002-demo-recordings';
 import { seedDemoLessons } from './steps/003-demo-lessons';
+import { seedDemoAssignment } from './steps/004-demo-assignment';
 
 /** The app's settings as variables (storage address, bucket …), as the app itself would read them. */
 export type SeedSettings = Record<string, string | undefined>;
@@ -17,6 +18,7 @@ export const SEED_STEPS: SeedStep[] = [
   { name: '001-people-and-classes', run: seedPeopleAndClasses },
   { name: '002-demo-recordings', run: seedDemoRecordings },
   { name: '003-demo-lessons', run: seedDemoLessons },
+  { name: '004-demo-assignment', run: (trx) => seedDemoAssignment(trx) },
 ];
 
 // Any fixed number: two starts at once must not seed twice.

@@ -42,9 +42,15 @@ export const routes: RouteObject[] = [
             { path: 'recordings', lazy: page(() => import('./routes/recordings/recordings')) },
             { path: 'recordings/:recordingId', lazy: page(() => import('./routes/recordings/recording-detail')) },
             { path: 'lessons/new', lazy: page(() => import('./routes/lessons/lesson-new')) },
+            { path: 'lessons/:lessonId/assign', lazy: page(() => import('./routes/assignments/assign-lesson')) },
+            { path: 'assignments/:assignmentId', lazy: page(() => import('./routes/assignments/assignment-detail')) },
             ...lessonPages,
           ]),
-          roleSection('student', 'student', [{ index: true, lazy: page(() => import('./routes/homes/student-home')) }]),
+          roleSection('student', 'student', [
+            { index: true, lazy: page(() => import('./routes/homes/student-home')) },
+            { path: 'assignments/:assignmentId/results', lazy: page(() => import('./routes/student/student-results')) },
+            { path: 'assignments/:assignmentId', lazy: page(() => import('./routes/student/watch')) },
+          ]),
           roleSection('coordinator', 'coordinator', [
             { index: true, lazy: page(() => import('./routes/homes/coordinator-home')) },
             ...lessonPages,

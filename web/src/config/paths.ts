@@ -11,6 +11,8 @@ export const paths = {
     class: (classId: string) => `/teacher/classes/${classId}`,
     recordings: '/teacher/recordings',
     recording: (recordingId: string) => `/teacher/recordings/${recordingId}`,
+    assignLesson: (lessonId: string) => `/teacher/lessons/${lessonId}/assign`,
+    assignment: (assignmentId: string) => `/teacher/assignments/${assignmentId}`,
   },
   /** Lesson pages live in each staff section ('/teacher', '/substitute', '/coordinator'): pass the section's base. */
   lessons: {
@@ -20,7 +22,11 @@ export const paths = {
     studio: (base: string, lessonId: string) => `${base}/lessons/${lessonId}/studio`,
     preview: (base: string, lessonId: string) => `${base}/lessons/${lessonId}/preview`,
   },
-  student: { home: '/student' },
+  student: {
+    home: '/student',
+    watch: (assignmentId: string) => `/student/assignments/${assignmentId}`,
+    results: (assignmentId: string) => `/student/assignments/${assignmentId}/results`,
+  },
   coordinator: { home: '/coordinator' },
   substitute: { home: '/substitute' },
   admin: {

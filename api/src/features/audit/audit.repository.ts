@@ -8,10 +8,14 @@ export type AuditAction =
   | 'roles_changed'
   | 'department_changed'
   | 'joined_class'
-  | LessonAuditAction;
+  | LessonAuditAction
+  | AssignmentAuditAction;
 
 /** Lesson events; subject_id names users only, so the lesson's id and title go in `data`. */
 export type LessonAuditAction = 'lesson_published' | 'lesson_shared' | 'lesson_unshared' | 'lesson_deleted';
+
+/** Assignment events; the assignment, lesson and class are named in `data` (see assignment-audit.ts). */
+export type AssignmentAuditAction = 'assignment_created' | 'assignment_updated' | 'assignment_moved' | 'assignment_deleted';
 
 export interface AuditEvent {
   schoolId: string | null;

@@ -5,7 +5,7 @@ import { beforeEach, describe, expect, it, vi } from 'vitest';
 import type { StudentCheckpoint, StudentLessonView } from '@core/contracts';
 import { FakeVideoPlayer } from './fake-video-player';
 import { LessonPlayer, type AnswerSender } from './lesson-player';
-import { gradeOf, testPlayback } from './player-test-support';
+import { gradedOf, testPlayback } from './player-test-support';
 import { answered, mcAt, predictionAt, viewOf } from './logic/test-view';
 import type { VideoPlayerProps } from './video-player';
 
@@ -36,7 +36,7 @@ describe('LessonPlayer kinds', { timeout: 20_000 }, () => {
     const onAnswer = vi
       .fn<AnswerSender>()
       .mockResolvedValueOnce(
-        gradeOf({
+        gradedOf({
           correct: null,
           feedback: 'Prediction saved. Watch what happens next.',
           attemptsLeft: 0,
@@ -44,7 +44,7 @@ describe('LessonPlayer kinds', { timeout: 20_000 }, () => {
         }),
       )
       .mockResolvedValueOnce(
-        gradeOf({
+        gradedOf({
           correct: null,
           feedback: 'Prediction saved.',
           attemptsLeft: 0,
@@ -83,7 +83,7 @@ describe('LessonPlayer kinds', { timeout: 20_000 }, () => {
   it('keeps whether a scored prediction matched until the reveal', async () => {
     const scored = { ...predictionAt('pred02', 1000, 4000), scored: true, askExplanation: false } as StudentCheckpoint;
     const onAnswer = vi.fn<AnswerSender>().mockResolvedValue(
-      gradeOf({
+      gradedOf({
         correct: false,
         feedback: 'Saved. Watch closely.',
         attemptsLeft: 0,
@@ -118,7 +118,7 @@ describe('LessonPlayer kinds', { timeout: 20_000 }, () => {
       choices: ['into', 'out'],
       figure: null,
     };
-    const onAnswer = vi.fn<AnswerSender>().mockResolvedValue(gradeOf({ correct: true, score: 1, feedback: 'Correct.' }));
+    const onAnswer = vi.fn<AnswerSender>().mockResolvedValue(gradedOf({ correct: true, score: 1, feedback: 'Correct.' }));
     const { user } = renderView(viewOf([sign]), onAnswer);
     play();
     playTo(1100);

@@ -5,7 +5,7 @@ import { beforeEach, describe, expect, it, vi } from 'vitest';
 import type { StudentCheckpoint } from '@core/contracts';
 import { FakeVideoPlayer } from './fake-video-player';
 import { LessonPlayer, type AnswerSender } from './lesson-player';
-import { gradeOf, testPlayback } from './player-test-support';
+import { gradedOf, testPlayback } from './player-test-support';
 import { answered, mcAt, viewOf } from './logic/test-view';
 import type { VideoPlayerProps } from './video-player';
 
@@ -20,7 +20,7 @@ vi.mock('./video-player', () => ({
 }));
 
 const playback = testPlayback;
-const grade = gradeOf;
+const grade = gradedOf;
 
 function renderPlayer(checkpoints: StudentCheckpoint[], onAnswer: AnswerSender = vi.fn(), safetyNotes = '') {
   const user = userEvent.setup();

@@ -1,5 +1,6 @@
 import { useEffect, useRef } from 'react';
-import type { PlaybackDto, StudentLessonView } from '@core/contracts';
+import { CHECKPOINT_KIND_LABELS, type PlaybackDto, type StudentLessonView } from '@core/contracts';
+import { formatTime } from '@core/lessons/time-format';
 import { cn } from '@/lib/cn';
 import { AsideCard } from './components/aside-card';
 import { ChapterList } from './components/chapter-list';
@@ -11,16 +12,31 @@ import { recordOf, type AttemptBook } from './logic/attempts';
 import { isStopDone } from './logic/player-state';
 import { checkpointAt } from './logic/stops';
 import { useCurrentMs } from './use-current-ms';
-import { useLessonPlayer, type AnswerSender, type LessonPlayerEvent } from './use-lesson-player';
+import { KeyboardHelp } from './components/keyboard-help';
+import {
+  useLessonPlayer,
+  type AnswerOutcome,
+  type AnswerRefusal,
+  type AnswerSender,
+  type GradeArrival,
+  type LessonPlayerEvent,
+} from './use-lesson-player';
+import { PlayerLocaleContext } from './player-locale';
 import { VideoPlayer, type Player } from './video-player';
 
-export type { AnswerSender, LessonPlayerEvent };
+export type { AnswerOutcome, AnswerRefusal, AnswerSender, GradeArrival, LessonPlayerEvent };
 
 export type LessonPlayerProps = {
   view: StudentLessonView;
   playback: PlaybackDto;
-  /** Sends one answer to the server and resolves with its grade; the player holds no answer keys. */
+  /** Sends one answer to the server and resolves with its grade (or "queued"); the player holds no answer keys. */
   onAnswer: AnswerSender;
+  /** Grades of answers that were queued, as they arrive (each id applied once). */
+  arrivals?: readonly GradeArrival[];
+  /** Queued answers the server refused for good (each id applied once). */
+  refusals?: readonly AnswerRefusal[];
+  /** Why answers and explanations are not shown yet when the page's reveal policy holds them back. */
+  revealNote?: string | null;
   mode: 'preview' | 'watch';
   onEvent?: (event: LessonPlayerEvent) => void;
   /** Fresh playback URLs (see VideoPlayer). */
@@ -51,9 +67,12 @@ export function LessonPlayer({
   onPlayer,
   safetyAcknowledged,
   initialBook,
+  arrivals,
+  refusals,
+  revealNote = null,
   className,
 }: LessonPlayerProps) {
-  const lesson = useLessonPlayer({ view, onAnswer, onEvent, safetyAcknowledged, initialBook });
+  const lesson = useLessonPlayer({ view, onAnswer, onEvent, safetyAcknowledged, initialBook, arrivals, refusals });
   const { state, player } = lesson;
   const currentMs = useCurrentMs(player);
   const headingRef = useRef<HTMLHeadingElement>(null);
@@ -74,77 +93,87 @@ export function LessonPlayer({
   }, [overlayId, player]);
 
   const overlayCheckpoint = overlay ? checkpointAt(view, overlay.stop.key) : undefined;
+  const stopName = overlayCheckpoint ? overlayCheckpoint.label.trim() || CHECKPOINT_KIND_LABELS[overlayCheckpoint.kind] : null;
   const errorFor = (key: string) => (lesson.sendError?.key === key ? lesson.sendError.message : null);
   const asides = state.asides.map((key) => checkpointAt(view, key)).filter((c) => c !== undefined);
 
   return (
-    <div
-      className={cn('flex flex-col gap-4', className)}
-      data-lesson-player={mode}
-      data-ready={lesson.scheduler ? 'true' : 'false'}
-      data-stop-ms={overlay ? overlay.stop.atMs : undefined}
-      data-stop-id={overlay ? overlay.stop.id : undefined}
-      data-current-ms={Math.round(currentMs)}
-    >
-      {!state.started ? <SafetyNotice notes={view.safetyNotes} onAcknowledge={lesson.acknowledgeSafety} /> : null}
-      <div className="relative">
-        <VideoPlayer
-          playback={playback}
-          label={mode === 'preview' ? `Preview of ${view.title}` : view.title}
-          onRefresh={onRefresh}
-          onReady={(created) => {
-            lesson.setPlayer(created);
-            onPlayer?.(created);
-          }}
-        />
-        {!state.started ? (
-          <div className="absolute inset-0 flex items-center justify-center rounded-lg bg-ink/80 p-4 text-center font-bold text-surface">
-            Read the safety notes above to start the video.
-          </div>
-        ) : null}
-        {overlay && overlayCheckpoint ? (
-          <div className="mt-3 md:absolute md:inset-0 md:mt-0 md:overflow-y-auto md:bg-ink/70 md:p-6">
-            <CheckpointOverlay
-              overlay={overlay}
-              checkpoint={overlayCheckpoint}
-              record={recordOf(state.book, overlay.stop.key)}
-              busy={lesson.busy}
-              sendError={errorFor(overlay.stop.key)}
-              headingRef={headingRef}
-              onSubmit={(answer) => void lesson.submit(overlay.stop.key, answer)}
-              onSkip={lesson.skip}
-              onContinue={() => lesson.proceed('attempts' in overlayCheckpoint)}
-              onTryAgain={lesson.tryAgain}
-            />
-          </div>
-        ) : null}
-      </div>
-      <CheckpointTicks player={player} stops={lesson.stops} durationMs={playback.durationSeconds * 1000} />
-      {asides.length > 0 ? (
-        <div className="flex flex-col gap-3" aria-live="polite">
-          {asides.map((checkpoint) => (
-            <AsideCard
-              key={checkpoint.key}
-              checkpoint={checkpoint}
-              record={recordOf(state.book, checkpoint.key)}
-              busy={lesson.busy}
-              sendError={errorFor(checkpoint.key)}
-              onSubmit={(answer) => void lesson.submit(checkpoint.key, answer)}
-              onDismiss={() => lesson.dismissAside(checkpoint.key)}
-            />
-          ))}
+    <PlayerLocaleContext.Provider value={view.locale}>
+      <div
+        className={cn('flex flex-col gap-4', className)}
+        data-lesson-player={mode}
+        data-ready={lesson.scheduler ? 'true' : 'false'}
+        data-stop-ms={overlay ? overlay.stop.atMs : undefined}
+        data-stop-id={overlay ? overlay.stop.id : undefined}
+        data-current-ms={Math.round(currentMs)}
+      >
+        {/* Said once when a panel opens, even where moving focus into it is not announced (some phone screen readers). */}
+        <p className="sr-only" aria-live="polite">
+          {overlay && stopName ? `The video stopped at ${formatTime(overlay.stop.atMs)}: ${stopName}.` : ''}
+        </p>
+        {!state.started ? <SafetyNotice notes={view.safetyNotes} onAcknowledge={lesson.acknowledgeSafety} /> : null}
+        <div className="relative">
+          <VideoPlayer
+            playback={playback}
+            label={mode === 'preview' ? `Preview of ${view.title}` : view.title}
+            onRefresh={onRefresh}
+            onReady={(created) => {
+              lesson.setPlayer(created);
+              onPlayer?.(created);
+            }}
+          />
+          {!state.started ? (
+            <div className="absolute inset-0 flex items-center justify-center rounded-lg bg-ink/80 p-4 text-center font-bold text-surface">
+              Read the safety notes above to start the video.
+            </div>
+          ) : null}
+          {overlay && overlayCheckpoint ? (
+            <div className="mt-3 md:absolute md:inset-0 md:mt-0 md:overflow-y-auto md:bg-ink/70 md:p-6">
+              <CheckpointOverlay
+                overlay={overlay}
+                checkpoint={overlayCheckpoint}
+                record={recordOf(state.book, overlay.stop.key)}
+                busy={lesson.busy}
+                sendError={errorFor(overlay.stop.key)}
+                headingRef={headingRef}
+                revealNote={revealNote}
+                onSubmit={(answer) => void lesson.submit(overlay.stop.key, answer)}
+                onSkip={lesson.skip}
+                onContinue={() => lesson.proceed('attempts' in overlayCheckpoint)}
+                onTryAgain={lesson.tryAgain}
+              />
+            </div>
+          ) : null}
         </div>
-      ) : null}
-      <div className="grid gap-4 md:grid-cols-2">
-        <ChapterList chapters={view.chapters} currentMs={currentMs} onJump={(ms) => lesson.scheduler?.seekTo(ms)} />
-        <CheckpointList
-          view={view}
-          stops={lesson.stops}
-          isDone={(stop) => isStopDone(state, stop)}
-          disabled={!state.started || !lesson.scheduler}
-          onOpen={lesson.openCheckpoint}
-        />
+        <CheckpointTicks player={player} view={view} stops={lesson.stops} durationMs={playback.durationSeconds * 1000} />
+        {asides.length > 0 ? (
+          <div className="flex flex-col gap-3" aria-live="polite">
+            {asides.map((checkpoint) => (
+              <AsideCard
+                key={checkpoint.key}
+                checkpoint={checkpoint}
+                record={recordOf(state.book, checkpoint.key)}
+                busy={lesson.busy}
+                sendError={errorFor(checkpoint.key)}
+                revealNote={revealNote}
+                onSubmit={(answer) => void lesson.submit(checkpoint.key, answer)}
+                onDismiss={() => lesson.dismissAside(checkpoint.key)}
+              />
+            ))}
+          </div>
+        ) : null}
+        <KeyboardHelp />
+        <div className="grid gap-4 md:grid-cols-2">
+          <ChapterList chapters={view.chapters} currentMs={currentMs} onJump={(ms) => lesson.scheduler?.seekTo(ms)} />
+          <CheckpointList
+            view={view}
+            stops={lesson.stops}
+            isDone={(stop) => isStopDone(state, stop)}
+            disabled={!state.started || !lesson.scheduler}
+            onOpen={lesson.openCheckpoint}
+          />
+        </div>
       </div>
-    </div>
+    </PlayerLocaleContext.Provider>
   );
 }

@@ -1,4 +1,5 @@
 import type { CheckpointGradeDto, PlaybackDto } from '@core/contracts';
+import type { AnswerOutcome } from './use-lesson-player';
 
 /** Fixtures shared by the player's component tests (invented demo data). */
 export const testPlayback: PlaybackDto = {
@@ -23,4 +24,11 @@ export const gradeOf = (over: Partial<CheckpointGradeDto>): CheckpointGradeDto =
   hints: [],
   reveal: null,
   ...over,
+});
+
+/** A sender's reply: graded now, feedback shown. */
+export const gradedOf = (over: Partial<CheckpointGradeDto>, feedbackHidden = false): AnswerOutcome => ({
+  status: 'graded',
+  grade: gradeOf(over),
+  feedbackHidden,
 });

@@ -21,12 +21,33 @@ import type { Player } from './video-player';
 export type LessonPlayerEvent =
   | { type: 'safety-acknowledged' }
   | { type: 'stopped'; key: string; phase: Stop['phase']; reason: OverlayReason; atMs: number }
-  | { type: 'graded'; key: string; attempt: number; grade: CheckpointGradeDto }
+  | { type: 'graded'; key: string; attempt: number; grade: CheckpointGradeDto; feedbackHidden: boolean }
+  | { type: 'queued'; key: string; attempt: number }
   | { type: 'skipped'; key: string }
   | { type: 'continued'; key: string; phase: Stop['phase'] }
   | { type: 'aside-dismissed'; key: string };
 
-export type AnswerSender = (key: string, answer: CheckpointAnswer, attempt: number) => Promise<CheckpointGradeDto>;
+/** What became of one answer: graded now, or kept on this device to be sent when the connection returns. */
+export type AnswerOutcome = { status: 'graded'; grade: CheckpointGradeDto; feedbackHidden: boolean } | { status: 'queued' };
+
+/**
+ * Sends one answer and resolves with its outcome; rejects when it was neither graded nor kept (the
+ * panel says so and the student may send it again). `attempt` is the player's own count.
+ */
+export type AnswerSender = (key: string, answer: CheckpointAnswer, attempt: number) => Promise<AnswerOutcome>;
+
+/** The grade of a queued answer, arrived later; `id` is unique per answer and each one is applied once. */
+export type GradeArrival = {
+  id: string;
+  key: string;
+  attempt: number;
+  answer: CheckpointAnswer;
+  grade: CheckpointGradeDto;
+  feedbackHidden: boolean;
+};
+
+/** A queued answer the server refused for good (closed, no attempts left…): not recorded; `message` says why. */
+export type AnswerRefusal = { id: string; key: string; attempt: number; message: string };
 
 type Options = {
   view: StudentLessonView;
@@ -34,6 +55,8 @@ type Options = {
   onEvent?: (event: LessonPlayerEvent) => void;
   safetyAcknowledged?: boolean;
   initialBook?: AttemptBook;
+  arrivals?: readonly GradeArrival[];
+  refusals?: readonly AnswerRefusal[];
 };
 
 function sendErrorText(error: unknown): string {
@@ -42,7 +65,7 @@ function sendErrorText(error: unknown): string {
 }
 
 /** The player's state (kept in a ref as well, so the scheduler's callbacks never read a stale copy) and its scheduler. */
-export function useLessonPlayer({ view, onAnswer, onEvent, safetyAcknowledged = false, initialBook }: Options) {
+export function useLessonPlayer({ view, onAnswer, onEvent, safetyAcknowledged = false, initialBook, arrivals, refusals }: Options) {
   const needsSafety = view.safetyNotes.trim() !== '' && !safetyAcknowledged;
   const [state, setState] = useState<PlayerState>(() => ({ ...initialPlayerState(needsSafety), book: initialBook ?? {} }));
   const stateRef = useRef(state);
@@ -108,9 +131,15 @@ export function useLessonPlayer({ view, onAnswer, onEvent, safetyAcknowledged = 
       setBusy(true);
       setSendError(null);
       try {
-        const grade = await onAnswer(key, answer, attempt);
-        dispatch({ type: 'graded', key, attempt, answer, grade });
-        report({ type: 'graded', key, attempt, grade });
+        const outcome = await onAnswer(key, answer, attempt);
+        if (outcome.status === 'queued') {
+          dispatch({ type: 'queued', key, attempt, answer });
+          report({ type: 'queued', key, attempt });
+        } else {
+          const { grade, feedbackHidden } = outcome;
+          dispatch({ type: 'graded', key, attempt, answer, grade, feedbackHidden });
+          report({ type: 'graded', key, attempt, grade, feedbackHidden });
+        }
       } catch (error) {
         setSendError({ key, message: sendErrorText(error) });
       } finally {
@@ -119,6 +148,26 @@ export function useLessonPlayer({ view, onAnswer, onEvent, safetyAcknowledged = 
     },
     [onAnswer, dispatch, report],
   );
+
+  // Grades of queued answers, and refusals, arrive from the page; each is applied once.
+  const applied = useRef(new Set<string>());
+  useEffect(() => {
+    for (const arrival of arrivals ?? []) {
+      if (applied.current.has(arrival.id)) continue;
+      applied.current.add(arrival.id);
+      const { key, attempt, answer, grade, feedbackHidden } = arrival;
+      dispatch({ type: 'graded', key, attempt, answer, grade, feedbackHidden });
+      report({ type: 'graded', key, attempt, grade, feedbackHidden });
+    }
+  }, [arrivals, dispatch, report]);
+  useEffect(() => {
+    for (const refusal of refusals ?? []) {
+      if (applied.current.has(refusal.id)) continue;
+      applied.current.add(refusal.id);
+      dispatch({ type: 'refused', key: refusal.key, attempt: refusal.attempt });
+      setSendError({ key: refusal.key, message: refusal.message });
+    }
+  }, [refusals, dispatch]);
 
   /** Jump to a checkpoint from the list: open it there (a gate before it still holds the video back). */
   const openCheckpoint = useCallback(

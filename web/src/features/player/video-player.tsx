@@ -8,6 +8,7 @@ import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
 import { cn } from '@/lib/cn';
 import { msUntilRefresh, PlaybackKeeper, type MediaLike } from '@/features/recordings/player/playback-keeper';
+import { applyHotkey, hotkeyAction } from './player-hotkeys';
 
 export type { Player };
 
@@ -109,9 +110,24 @@ export function VideoPlayer({ playback, onReady, onRefresh, label = 'Video', cla
       preload: 'metadata',
       playsinline: true,
       playbackRates: PLAYBACK_RATES,
+      // A volume slider that pops up instead of sitting in the bar leaves a phone's narrow bar to the progress bar and its checkpoint marks.
+      controlBar: { volumePanel: { inline: false } },
       poster: first.posterUrl ?? undefined,
       sources: [{ src: first.src.url, type: first.src.type }],
-      userActions: { hotkeys: true },
+      userActions: {
+        // video.js calls this with the player as `this` for keys pressed while the player has focus (not in text fields).
+        hotkeys: function (this: Player, event: KeyboardEvent) {
+          const action = hotkeyAction(event.key);
+          if (!action) return;
+          if (action.type === 'video.js') {
+            this.handleHotkeys(event);
+            return;
+          }
+          event.preventDefault();
+          event.stopPropagation();
+          applyHotkey(this, action, PLAYBACK_RATES);
+        },
+      },
     });
     created.on('loadedmetadata', () => {
       setStuck(false);

@@ -48,7 +48,11 @@ export default function LessonPreviewRoute() {
           view={view.data}
           playback={playback.data}
           mode="preview"
-          onAnswer={(key, checkpointAnswer, attempt) => answer.mutateAsync({ key, answer: checkpointAnswer, attempt })}
+          onAnswer={(key, checkpointAnswer, attempt) =>
+            answer
+              .mutateAsync({ key, answer: checkpointAnswer, attempt })
+              .then((grade) => ({ status: 'graded', grade, feedbackHidden: false }) as const)
+          }
           onRefresh={() => refetchPlayback().then((result) => result.data)}
         />
       ) : null}

@@ -3,7 +3,7 @@ import { CHECKPOINT_KIND_LABELS, type CheckpointAnswer, type StudentCheckpoint }
 import { formatTime } from '@core/lessons/time-format';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
-import { canTryAgain, hasAnswered, type AttemptRecord } from '../logic/attempts';
+import { canTryAgain, hasAnswered, tryAgainLabel, type AttemptRecord } from '../logic/attempts';
 import { maySkip, type Overlay } from '../logic/player-state';
 import { CheckpointBody } from './checkpoint-body';
 import { RevealPanel } from './reveal-panel';
@@ -16,6 +16,8 @@ export type CheckpointOverlayProps = {
   /** Sending failed (network, server): the answer was not graded and may be sent again. */
   sendError: string | null;
   headingRef: Ref<HTMLHeadingElement>;
+  /** Why answers are not shown yet (the reveal policy), or null. */
+  revealNote: string | null;
   onSubmit: (answer: CheckpointAnswer) => void;
   onSkip: () => void;
   onContinue: () => void;
@@ -31,7 +33,7 @@ function reasonText(overlay: Overlay): string | null {
 
 /** The panel a paused video shows at a pin or a reveal: over the video on wide screens, a sheet below it on phones. */
 export function CheckpointOverlay(props: CheckpointOverlayProps) {
-  const { overlay, checkpoint, record, busy, sendError, headingRef } = props;
+  const { overlay, checkpoint, record, busy, sendError, headingRef, revealNote } = props;
   const answerable = 'attempts' in checkpoint;
   const isReveal = overlay.stop.phase === 'reveal';
   const reason = reasonText(overlay);
@@ -64,9 +66,16 @@ export function CheckpointOverlay(props: CheckpointOverlayProps) {
       </header>
       {reason ? <Banner tone="info">{reason}</Banner> : null}
       {isReveal && checkpoint.kind === 'prediction' ? (
-        <RevealPanel checkpoint={checkpoint} record={record} busy={busy} onSubmit={props.onSubmit} />
+        <RevealPanel checkpoint={checkpoint} record={record} busy={busy} revealNote={revealNote} onSubmit={props.onSubmit} />
       ) : (
-        <CheckpointBody checkpoint={checkpoint} record={record} phase={overlay.phase} busy={busy} onSubmit={props.onSubmit} />
+        <CheckpointBody
+          checkpoint={checkpoint}
+          record={record}
+          phase={overlay.phase}
+          busy={busy}
+          revealNote={revealNote}
+          onSubmit={props.onSubmit}
+        />
       )}
       {sendError ? (
         <Banner tone="error" title="The answer was not sent">
@@ -81,7 +90,7 @@ export function CheckpointOverlay(props: CheckpointOverlayProps) {
         ) : null}
         {!asking && canTryAgain(record) && !isReveal && checkpoint.kind !== 'prediction' ? (
           <Button variant="secondary" size="lg" onClick={props.onTryAgain}>
-            Try again
+            {tryAgainLabel(record)}
           </Button>
         ) : null}
         {showContinue ? (

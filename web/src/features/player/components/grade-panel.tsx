@@ -9,12 +9,17 @@ type GradePanelProps = {
   showReveal: boolean;
   /** A prediction at its pin: whether it matched is told at the reveal, so the verdict reads "Saved". */
   verdictLater?: boolean;
+  /** The feedback policy hides right/wrong: a neutral "saved", and how many changes remain. */
+  feedbackHidden?: boolean;
+  /** Why no answer is shown once nothing more can be submitted (the reveal policy), or null. */
+  revealNote?: string | null;
 };
 
 const VERDICTS = {
   right: { Icon: CheckIcon, words: 'Right', tone: 'border-success bg-success-soft', icon: 'text-success' },
   wrong: { Icon: AlertIcon, words: 'Not right yet', tone: 'border-danger bg-danger-soft', icon: 'text-danger' },
   saved: { Icon: InfoIcon, words: 'Saved', tone: 'border-teal bg-teal-soft', icon: 'text-teal' },
+  hidden: { Icon: InfoIcon, words: 'Answer saved', tone: 'border-teal bg-teal-soft', icon: 'text-teal' },
 } as const;
 
 function attemptsText(left: number): string {
@@ -22,16 +27,22 @@ function attemptsText(left: number): string {
   return left === 1 ? '1 attempt left.' : `${left} attempts left.`;
 }
 
+function changesText(left: number): string {
+  if (left <= 0) return 'This is your final answer here.';
+  const times = left === 1 ? 'once more' : `${left} more times`;
+  return `You can change it ${times}; your latest answer is the one that counts.`;
+}
+
 /** What the server's grade said, in words and an icon (never colour alone). */
-export function GradePanel({ grade, showReveal, verdictLater = false }: GradePanelProps) {
-  const shown = verdictLater ? null : grade.correct;
-  const verdict = VERDICTS[shown === true ? 'right' : shown === false ? 'wrong' : 'saved'];
+export function GradePanel({ grade, showReveal, verdictLater = false, feedbackHidden = false, revealNote = null }: GradePanelProps) {
+  const shown = verdictLater || feedbackHidden ? null : grade.correct;
+  const verdict = VERDICTS[feedbackHidden ? 'hidden' : shown === true ? 'right' : shown === false ? 'wrong' : 'saved'];
   const { Icon } = verdict;
   return (
     <section
       aria-label="Result"
       className={cn('flex flex-col gap-3 rounded-md border-l-4 px-4 py-3', verdict.tone)}
-      data-verdict={shown === null ? 'saved' : String(shown)}
+      data-verdict={feedbackHidden ? 'hidden' : shown === null ? 'saved' : String(shown)}
     >
       <p className="flex items-center gap-2 text-lg font-bold" role="status">
         <Icon className={cn('size-6 shrink-0', verdict.icon)} />
@@ -51,7 +62,11 @@ export function GradePanel({ grade, showReveal, verdictLater = false }: GradePan
         </div>
       ) : null}
       {shown === false ? <p className="text-sm">{attemptsText(grade.attemptsLeft)}</p> : null}
+      {feedbackHidden && !verdictLater ? <p className="text-sm">{changesText(grade.attemptsLeft)}</p> : null}
       {showReveal && grade.reveal ? <RevealText answer={grade.reveal.answer} explanation={grade.reveal.explanation} /> : null}
+      {showReveal && !grade.reveal && revealNote && (grade.correct === true || grade.attemptsLeft <= 0) ? (
+        <p className="text-sm">{revealNote}</p>
+      ) : null}
     </section>
   );
 }

@@ -5,7 +5,7 @@ import { Button } from '@/components/ui/button';
 import { Field } from '@/components/ui/field';
 import { AlertIcon, CheckIcon } from '@/components/ui/icons';
 import { Textarea } from '@/components/ui/input';
-import type { AttemptRecord } from '../logic/attempts';
+import { isPending, latestAnswer, type AttemptRecord } from '../logic/attempts';
 import { RevealText } from './grade-panel';
 
 type PredictionCheckpoint = Extract<StudentCheckpoint, { kind: 'prediction' }>;
@@ -20,19 +20,27 @@ type RevealPanelProps = {
   checkpoint: PredictionCheckpoint;
   record: AttemptRecord;
   busy: boolean;
+  /** The reveal policy holds what happened back for now: say when it comes instead of asking for it. */
+  revealNote?: string | null;
   onSubmit: (answer: CheckpointAnswer) => void;
 };
 
 /**
  * At the reveal time: the student's own prediction beside what happened, and the optional "Explain
  * the difference". What happened comes from the server's grade; when the first reply did not carry
- * it yet, sending the prediction again (with the explanation) asks for it.
+ * it yet, sending the prediction again (with the explanation) asks for it. A prediction still waiting
+ * on this device, or a policy that shows answers later, gets a sentence instead of that button.
  */
-export function RevealPanel({ checkpoint, record, busy, onSubmit }: RevealPanelProps) {
+export function RevealPanel({ checkpoint, record, busy, revealNote = null, onSubmit }: RevealPanelProps) {
   const [explanation, setExplanation] = useState('');
-  const answer = record.answer?.kind === 'prediction' ? record.answer : null;
+  const latest = latestAnswer(record);
+  const answer = latest?.kind === 'prediction' ? latest : null;
   if (!answer) return <p>You did not make a prediction here. Watch what happens next.</p>;
-  const reveal = record.grade && !record.grade.invalid ? record.grade.reveal : null;
+  const waiting = isPending(record);
+  const reveal = !waiting && record.grade && !record.grade.invalid ? record.grade.reveal : null;
+  const heldBack = waiting
+    ? 'Your prediction is saved on this device and not graded yet; what happened is shown here once it has reached the server. Watch the video to see it.'
+    : revealNote;
   const explained = answer.explanation !== null;
   const send = () => onSubmit({ ...answer, explanation: explanation.trim() === '' ? null : explanation });
   return (
@@ -52,6 +60,8 @@ export function RevealPanel({ checkpoint, record, busy, onSubmit }: RevealPanelP
           ) : null}
           {reveal ? (
             <RevealText answer={checkpoint.scored ? reveal.answer : ''} explanation={reveal.explanation} />
+          ) : heldBack ? (
+            <p>{heldBack}</p>
           ) : (
             <p>Press “Show what happened” to compare.</p>
           )}
@@ -69,7 +79,7 @@ export function RevealPanel({ checkpoint, record, busy, onSubmit }: RevealPanelP
           )}
         </Field>
       ) : null}
-      {!reveal ? (
+      {!reveal && !heldBack ? (
         <div>
           <Button busy={busy} onClick={send} className="w-full sm:w-auto">
             Show what happened

@@ -1,6 +1,18 @@
 import { describe, expect, it } from 'vitest';
 import type { CheckpointGradeDto } from '@core/contracts';
-import { canTryAgain, hasAnswered, isFinished, nextAttempt, recordGrade, recordOf } from './attempts';
+import {
+  canTryAgain,
+  hasAnswered,
+  isFinished,
+  isPending,
+  latestAnswer,
+  nextAttempt,
+  recordGrade,
+  recordOf,
+  recordQueued,
+  recordRefused,
+  tryAgainLabel,
+} from './attempts';
 
 const grade = (over: Partial<CheckpointGradeDto>): CheckpointGradeDto => ({
   correct: false,
@@ -41,5 +53,34 @@ describe('attempt book', () => {
     expect(isFinished(recordOf(spent, 'k'))).toBe(true);
     expect(canTryAgain(recordOf(spent, 'k'))).toBe(false);
     expect(isFinished(recordOf({}, 'k'))).toBe(false);
+  });
+});
+
+describe('attempt book with queued answers', () => {
+  it('counts a queued answer as given, blocks a retry, and clears it when its grade arrives', () => {
+    let book = recordQueued({}, 'k', 1, answer);
+    const queued = recordOf(book, 'k');
+    expect(hasAnswered(queued)).toBe(true);
+    expect(isPending(queued)).toBe(true);
+    expect(nextAttempt(book, 'k')).toBe(2);
+    expect(canTryAgain(queued)).toBe(false);
+    expect(latestAnswer(queued)).toEqual(answer);
+    book = recordGrade(book, 'k', 1, answer, grade({}));
+    expect(isPending(recordOf(book, 'k'))).toBe(false);
+    expect(recordOf(book, 'k').used).toBe(1);
+    expect(canTryAgain(recordOf(book, 'k'))).toBe(true);
+  });
+
+  it('drops a refused answer without counting it', () => {
+    const book = recordRefused(recordQueued({}, 'k', 1, answer), 'k', 1);
+    expect(hasAnswered(recordOf(book, 'k'))).toBe(false);
+    expect(nextAttempt(book, 'k')).toBe(1);
+  });
+
+  it('labels a new attempt "Change my answer" when feedback is hidden', () => {
+    const hidden = recordGrade({}, 'k', 1, answer, grade({ correct: null }), true);
+    expect(tryAgainLabel(recordOf(hidden, 'k'))).toBe('Change my answer');
+    expect(canTryAgain(recordOf(hidden, 'k'))).toBe(true);
+    expect(tryAgainLabel(recordOf(recordGrade({}, 'k', 1, answer, grade({})), 'k'))).toBe('Try again');
   });
 });

@@ -1,5 +1,5 @@
 import type { CheckpointAnswer, CheckpointGradeDto } from '@core/contracts';
-import { hasAnswered, recordGrade, recordOf, type AttemptBook } from './attempts';
+import { hasAnswered, recordGrade, recordOf, recordQueued, recordRefused, type AttemptBook } from './attempts';
 import type { Stop } from './stops';
 
 /** Why an overlay opened: the video reached it, a refused seek came back to it, a seek jumped over it, or the viewer opened it. */
@@ -21,7 +21,11 @@ export type PlayerState = {
 export type PlayerEvent =
   | { type: 'start' }
   | { type: 'reach'; stop: Stop; reason: OverlayReason }
-  | { type: 'graded'; key: string; attempt: number; answer: CheckpointAnswer; grade: CheckpointGradeDto }
+  | { type: 'graded'; key: string; attempt: number; answer: CheckpointAnswer; grade: CheckpointGradeDto; feedbackHidden?: boolean }
+  /** Kept on this device to be sent later: it counts as answered (a gate opens), its grade arrives as 'graded'. */
+  | { type: 'queued'; key: string; attempt: number; answer: CheckpointAnswer }
+  /** A queued answer the server refused for good (not recorded): the form opens again. */
+  | { type: 'refused'; key: string; attempt: number }
   | { type: 'try-again' }
   | { type: 'skip' }
   | { type: 'continue'; answerable: boolean }
@@ -56,6 +60,12 @@ export function mayContinue(state: PlayerState, overlay: Overlay, answerable: bo
   return hasAnswered(recordOf(state.book, overlay.stop.key));
 }
 
+/** The open overlay of checkpoint `key` (if it is the open one) shows `phase`. */
+function withPhase(state: PlayerState, key: string, phase: Overlay['phase']): PlayerState {
+  const overlay = state.overlay;
+  return overlay && overlay.stop.key === key ? { ...state, overlay: { ...overlay, phase } } : state;
+}
+
 function addOnce(list: readonly string[], id: string): readonly string[] {
   return list.includes(id) ? list : [...list, id];
 }
@@ -68,16 +78,19 @@ export function playerReducer(state: PlayerState, event: PlayerEvent): PlayerSta
     case 'reach': {
       const { stop, reason } = event;
       if (!stop.pauses) return { ...state, asides: addOnce(state.asides, stop.key) };
-      const graded = stop.phase === 'pin' && recordOf(state.book, stop.key).grade !== null;
+      const record = recordOf(state.book, stop.key);
+      const graded = stop.phase === 'pin' && (hasAnswered(record) || record.grade !== null) && record.grade?.invalid !== true;
       return { ...state, overlay: { stop, reason, phase: graded && reason === 'opened' ? 'graded' : 'asking' } };
     }
     case 'graded': {
-      const book = recordGrade(state.book, event.key, event.attempt, event.answer, event.grade);
-      const overlay = state.overlay;
+      const book = recordGrade(state.book, event.key, event.attempt, event.answer, event.grade, event.feedbackHidden);
       // An answer the server could not read stays in the form, with its message there.
-      const phase = event.grade.invalid ? 'asking' : 'graded';
-      return { ...state, book, overlay: overlay && overlay.stop.key === event.key ? { ...overlay, phase } : overlay };
+      return withPhase({ ...state, book }, event.key, event.grade.invalid ? 'asking' : 'graded');
     }
+    case 'queued':
+      return withPhase({ ...state, book: recordQueued(state.book, event.key, event.attempt, event.answer) }, event.key, 'graded');
+    case 'refused':
+      return withPhase({ ...state, book: recordRefused(state.book, event.key, event.attempt) }, event.key, 'asking');
     case 'try-again':
       return state.overlay ? { ...state, overlay: { ...state.overlay, phase: 'asking' } } : state;
     case 'skip':

@@ -37,5 +37,5 @@ export const predictionAt = (key: string, atMs: number, revealAtMs: number): Stu
 });
 
 export function viewOf(checkpoints: StudentCheckpoint[], safetyNotes = ''): StudentLessonView {
-  return { title: 'Coil and compass (demo)', safetyNotes, chapters: [], checkpoints };
+  return { title: 'Coil and compass (demo)', locale: 'en-GB', safetyNotes, chapters: [], checkpoints };
 }
