@@ -74,6 +74,8 @@ function trustProxy(value: string): boolean | number | string {
 export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAccounts }: AppDeps): express.Express {
   const app = express();
   app.disable('x-powered-by');
+  // API replies are per person and mostly no-store: hashing every body for an ETag buys nothing.
+  app.set('etag', false);
   app.set('trust proxy', trustProxy(env.TRUST_PROXY));
 
   // The header, except for the viewing beacon (sendBeacon cannot set one): its token is in the body.
@@ -131,7 +133,8 @@ export function createApp({ env, db, pool, mailer, logger, storage, jobs, demoAc
   api.use(express.json({ limit: env.BODY_LIMIT }));
   api.use(VIEWING_BEACON_ROUTE, beaconBody(env.BODY_LIMIT));
   api.use(createSessionMiddleware({ pool, secret: env.SESSION_SECRET, secure: env.PUBLIC_URL.startsWith('https://'), invalidation }));
-  api.use(passport.initialize());
+  // Only the Google sign-in routes use passport (with session: false): no other request pays for it.
+  api.use('/auth', passport.initialize());
   api.use(csrf.csrfSynchronisedProtection);
   api.use(loadActor(db, invalidation));
   const contexts = createAssignmentContexts({ db, invalidation });

@@ -8,7 +8,9 @@ declare module 'autocannon' {
       max: number;
     }
     interface Result {
-      requests: Histogram;
+      requests: Histogram & { total: number };
+      /** Seconds. */
+      duration: number;
       latency: Histogram;
       errors: number;
       timeouts: number;

@@ -6,14 +6,15 @@
  *  1. the product: the API as `npm start` runs it (api/src/server.ts in a child process, worker and
  *     rollup loop in process), 300 invented students each with a real session written into the
  *     session store, and autocannon on loopback driving POST /api/student/assignments/:id/responses
- *     for 20 s at 50 connections: session cookie, CSRF token, validation, grading (numeric answers
+ *     for 20 s at 50 connections (in slices, below): session cookie, CSRF token, validation, grading (numeric answers
  *     with per-student values and multiple-choice), idempotency, insert. Every request has a fresh
  *     idempotency key; the run checks that every 2xx reply has exactly one stored row and no refused
  *     request has any (requests cut off in flight when the run stops may be stored: each once).
  *  2. the baseline: the simplest possible implementation, a bare Express endpoint inserting the same
  *     row through a `pg` pool of the same size (10), in a child process, under the same load.
  *  3. for context: pgbench's single-row insert rate on the same PostgreSQL (10 clients).
- * Ports 4350/4351 (BENCH_API_PORT, BENCH_BASELINE_PORT). Last line:
+ * Both servers run side by side and are driven in turn, four 5-second slices each (20 s in all), so
+ * other load on the machine falls on both alike. Ports 4350/4351 (BENCH_API_PORT, BENCH_BASELINE_PORT). Last line:
  * `responses: <req/s> req/s, p99 <ms> ms, baseline: <req/s> req/s, ratio: <responses/baseline>, pgbench: <tps> tps`.
  */
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
@@ -44,6 +45,7 @@ const STUDENTS = 300;
 const CONNECTIONS = 50;
 const DURATION_S = 20;
 const WARM_UP_S = 3;
+const SLICES = 4;
 const POOL_SIZE = 10;
 const ATTEMPTS = 10;
 const CHECKPOINTS = 40;
@@ -308,12 +310,12 @@ async function checkRows(db: Knex, assignmentId: string, load: Load): Promise<st
   const missing = [...load.ok].filter((key) => counts.get(key) !== 1);
   if (missing.length > 0) throw new Error(`${missing.length} answers acknowledged with 2xx do not have exactly one row`);
   const extra = [...counts.keys()].filter((key) => !load.ok.has(key));
-  if (extra.length > CONNECTIONS) throw new Error(`${extra.length} rows belong to requests that got no 2xx reply`);
+  if (extra.length > CONNECTIONS * SLICES) throw new Error(`${extra.length} rows belong to requests that got no 2xx reply`);
   const refused = [...load.statuses].filter(([what]) => Number(what.split(' ')[0]) >= 300);
   if (refused.length > 0) throw new Error(`non-2xx replies: ${JSON.stringify(Object.fromEntries(refused))}`);
   return (
     `${load.ok.size} 2xx replies, ${load.ok.size} rows for them` +
-    (extra.length ? ` (+${extra.length} sent when the run stopped, each stored once)` : '')
+    (extra.length ? ` (+${extra.length} cut off in flight at the ends of the slices, each stored once)` : '')
   );
 }
 
@@ -395,7 +397,29 @@ async function admin(sql: string): Promise<void> {
   }
 }
 
-const summary = (result: autocannon.Result) => `${Math.round(result.requests.average)} req/s, p99 ${result.latency.p99} ms`;
+type Run = { result: autocannon.Result; load: Load };
+interface Measured {
+  runs: Run[];
+  rate: number;
+  /** The highest of the slices' p99 (slices cannot be merged more exactly from autocannon's summaries). */
+  p99: number;
+  load: Load;
+}
+
+function combine(runs: Run[]): Measured {
+  const load: Load = { sent: new Set(), ok: new Set(), statuses: new Map() };
+  for (const run of runs) {
+    run.load.sent.forEach((key) => load.sent.add(key));
+    run.load.ok.forEach((key) => load.ok.add(key));
+    run.load.statuses.forEach((count, what) => load.statuses.set(what, (load.statuses.get(what) ?? 0) + count));
+  }
+  const requests = runs.reduce((sum, run) => sum + run.result.requests.total, 0);
+  const seconds = runs.reduce((sum, run) => sum + run.result.duration, 0);
+  return { runs, rate: requests / seconds, p99: Math.max(...runs.map((run) => run.result.latency.p99)), load };
+}
+
+const describe = (m: Measured) =>
+  `${Math.round(m.rate)} req/s, p99 ${m.p99} ms (slices: ${m.runs.map((r) => Math.round(r.result.requests.total / r.result.duration)).join(', ')} req/s)`;
 
 async function main(): Promise<void> {
   const name = `pinfield_bench_${randomBytes(4).toString('hex')}`;
@@ -424,37 +448,39 @@ async function main(): Promise<void> {
       WEB_DIST: '/nonexistent',
       AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED: 'true',
     });
-    children.push(api);
-    await waitFor(`http://127.0.0.1:${API_PORT}/api/health`);
-    const apiUrl = `http://127.0.0.1:${API_PORT}`;
-    // Sends per student carry on from the warm-up, so no student passes the attempts allowed.
-    const apiSends = new Map<string, number>();
-    await drive(apiUrl, world, WARM_UP_S, 'api', apiSends);
-    const product = await drive(apiUrl, world, DURATION_S, 'api', apiSends);
-    await sleep(500);
-    console.log(`responses: ${summary(product.result)}; ${await checkRows(db, world.assignmentId, product.load)}`);
-    await stopChild(api);
-    if (process.env.BENCH_ONLY === 'api') return;
-
-    const baselineChild = startChild('baseline', ['--import', 'tsx', fileURLToPath(import.meta.url), '--baseline-server'], {
+    const baselineServerChild = startChild('baseline', ['--import', 'tsx', fileURLToPath(import.meta.url), '--baseline-server'], {
       DATABASE_URL: url,
       PORT: String(BASELINE_PORT),
     });
-    children.push(baselineChild);
+    children.push(api, baselineServerChild);
+    await waitFor(`http://127.0.0.1:${API_PORT}/api/health`);
     await waitFor(`http://127.0.0.1:${BASELINE_PORT}/`);
-    const baselineUrl = `http://127.0.0.1:${BASELINE_PORT}`;
-    const baselineSends = new Map<string, number>();
-    await drive(baselineUrl, world, WARM_UP_S, 'baseline', baselineSends);
-    const baseline = await drive(baselineUrl, world, DURATION_S, 'baseline', baselineSends);
+    const product = { url: `http://127.0.0.1:${API_PORT}`, kind: 'api' as const, sends: new Map<string, number>(), runs: [] as Run[] };
+    const baseline = {
+      url: `http://127.0.0.1:${BASELINE_PORT}`,
+      kind: 'baseline' as const,
+      sends: new Map<string, number>(),
+      runs: [] as Run[],
+    };
+    // Sends per student carry on from the warm-up, so no student passes the attempts allowed.
+    for (const side of [product, baseline]) await drive(side.url, world, WARM_UP_S, side.kind, side.sends);
+    // Interleaved slices, so a change in the machine's other load falls on both sides alike.
+    for (let slice = 0; slice < SLICES; slice += 1) {
+      for (const side of [product, baseline]) side.runs.push(await drive(side.url, world, DURATION_S / SLICES, side.kind, side.sends));
+    }
     await sleep(500);
-    console.log(`baseline: ${summary(baseline.result)}; ${await checkRows(db, world.baselineAssignmentId, baseline.load)}`);
-    await stopChild(baselineChild);
+    const mine = combine(product.runs);
+    const bare = combine(baseline.runs);
+    console.log(`responses: ${describe(mine)}`);
+    console.log(`baseline: ${describe(bare)}`);
+    console.log(`responses rows: ${await checkRows(db, world.assignmentId, mine.load)}`);
+    console.log(`baseline rows: ${await checkRows(db, world.baselineAssignmentId, bare.load)}`);
+    for (const child of children) await stopChild(child);
 
     const tps = await pgbench(url, db);
-    const ratio = product.result.requests.average / baseline.result.requests.average;
     console.log(
-      `responses: ${Math.round(product.result.requests.average)} req/s, p99 ${product.result.latency.p99} ms, ` +
-        `baseline: ${Math.round(baseline.result.requests.average)} req/s, ratio: ${ratio.toFixed(2)}, pgbench: ${Math.round(tps)} tps`,
+      `responses: ${Math.round(mine.rate)} req/s, p99 ${mine.p99} ms, baseline: ${Math.round(bare.rate)} req/s, ` +
+        `ratio: ${(mine.rate / bare.rate).toFixed(2)}, pgbench: ${Math.round(tps)} tps`,
     );
   } finally {
     for (const child of children) await stopChild(child);

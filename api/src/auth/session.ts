@@ -35,67 +35,79 @@ const cookieExpiry = (sess: SessionData) => {
  */
 function cachedStore(pool: pg.Pool, invalidation: CacheInvalidation) {
   const PgStore = connectPgSimple(session);
-  const cache = new Map<string, CachedSession>();
+  // By session id; `digests` finds an entry from the md5 a trigger sends (computed once per entry, not per request).
+  const cache = new Map<string, CachedSession & { digest: string }>();
+  const digests = new Map<string, string>();
   // The expiry this process last wrote per session: a touch that would barely move it is skipped.
   const written = new Map<string, number>();
 
+  const forget = (sid: string) => {
+    const entry = cache.get(sid);
+    if (entry) digests.delete(entry.digest);
+    cache.delete(sid);
+  };
   invalidation.subscribe((event) => {
-    if (event.kind === 'all') cache.clear();
-    else if (event.kind === 'session') cache.delete(event.id);
+    if (event.kind === 'all') {
+      cache.clear();
+      digests.clear();
+    } else if (event.kind === 'session') {
+      const sid = digests.get(event.id);
+      if (sid !== undefined) forget(sid);
+    }
   });
-
-  const remember = <V>(map: Map<string, V>, key: string, value: V) => {
-    if (map.size >= SESSIONS_KEPT) map.delete(map.keys().next().value as string);
-    map.set(key, value);
+  const keep = (sid: string, sess: SessionData) => {
+    if (cache.size >= SESSIONS_KEPT) forget(cache.keys().next().value as string);
+    const digest = sessionDigest(sid);
+    cache.set(sid, { json: JSON.stringify(sess), expiresMs: cookieExpiry(sess), digest });
+    digests.set(digest, sid);
+  };
+  const wrote = (sid: string, expiresMs: number) => {
+    if (written.size >= SESSIONS_KEPT) written.delete(written.keys().next().value as string);
+    written.set(sid, expiresMs);
   };
 
   class CachedPgStore extends PgStore {
     override get(sid: string, callback: (err: unknown, session?: SessionData | null) => void): void {
-      const digest = sessionDigest(sid);
-      const hit = invalidation.trusted() ? cache.get(digest) : undefined;
+      const hit = invalidation.trusted() ? cache.get(sid) : undefined;
       if (hit && hit.expiresMs > Date.now()) {
         callback(null, JSON.parse(hit.json) as SessionData);
         return;
       }
       const epoch = invalidation.epoch();
       super.get(sid, (err, sess) => {
-        if (!err && sess && invalidation.epoch() === epoch)
-          remember(cache, digest, { json: JSON.stringify(sess), expiresMs: cookieExpiry(sess) });
+        if (!err && sess && invalidation.epoch() === epoch) keep(sid, sess);
         callback(err, sess);
       });
     }
 
     override set(sid: string, sess: SessionData, callback?: (err?: unknown) => void): void {
-      const digest = sessionDigest(sid);
-      cache.delete(digest);
+      forget(sid);
       const epoch = invalidation.epoch();
       super.set(sid, sess, (err) => {
         if (!err) {
-          remember(written, digest, cookieExpiry(sess));
-          if (invalidation.epoch() === epoch) remember(cache, digest, { json: JSON.stringify(sess), expiresMs: cookieExpiry(sess) });
+          wrote(sid, cookieExpiry(sess));
+          if (invalidation.epoch() === epoch) keep(sid, sess);
         }
         callback?.(err);
       });
     }
 
     override destroy(sid: string, callback?: (err?: unknown) => void): void {
-      const digest = sessionDigest(sid);
-      cache.delete(digest);
-      written.delete(digest);
+      forget(sid);
+      written.delete(sid);
       super.destroy(sid, callback);
     }
 
     override touch(sid: string, sess: SessionData, callback?: () => void): void {
-      const digest = sessionDigest(sid);
       const wanted = cookieExpiry(sess);
-      const last = written.get(digest);
+      const last = written.get(sid);
       if (last !== undefined && wanted - last < SESSION_TOUCH_SLACK_MS) {
         callback?.();
         return;
       }
       super.touch(sid, sess, () => {
-        remember(written, digest, wanted);
-        const hit = cache.get(digest);
+        wrote(sid, wanted);
+        const hit = cache.get(sid);
         if (hit) hit.expiresMs = Math.max(hit.expiresMs, wanted);
         callback?.();
       });

@@ -46,7 +46,8 @@ const SHUTDOWN_GRACE_MS = 5000;
 
 /**
  * Runs the queues' handlers in this process: recordings one at a time (one pg-boss worker, batch
- * size 1, so a single ffmpeg runs at a time), dead letters, and the hourly sweep of abandoned uploads.
+ * size 1, so a single ffmpeg runs at a time), dead letters, the hourly sweep of abandoned uploads, and
+ * the rollup loop that keeps the results pages' rollups (features/rollups).
  */
 export async function startWorker(options: WorkerOptions): Promise<RecordingWorker> {
   const { queue, db, storage, logger } = options;

@@ -21,6 +21,8 @@ export interface LockedProgress {
   studentId: string;
   watchedSeconds: number;
   completedAt: Date | null;
+  /** The student's last visit to their results (which may show answers once the lesson closed). */
+  resultsSeenAt: Date | null;
 }
 
 export const pairKey = (assignmentId: string, studentId: string) => `${assignmentId}:${studentId}`;
@@ -39,7 +41,17 @@ export function lockProgressSql(pairs: PairKey[]): string {
     WHERE EXISTS (SELECT 1 FROM enrolments e WHERE e.class_id = u.c AND e.student_id = u.s)
     ORDER BY u.n
     ON CONFLICT (assignment_id, student_id) DO UPDATE SET updated_at = now()
-    RETURNING assignment_id AS "assignmentId", student_id AS "studentId", watched_seconds AS "watchedSeconds", completed_at AS "completedAt"`;
+    RETURNING assignment_id AS "assignmentId", student_id AS "studentId", watched_seconds AS "watchedSeconds", completed_at AS "completedAt",
+      results_seen_at AS "resultsSeenAt"`;
+}
+
+/**
+ * The assignments' versions as committed now, read after the progress locks: a move to a corrected
+ * version that committed while this batch waited shows here, and answers planned with the old
+ * version are planned again.
+ */
+export function assignmentVersionsSql(assignmentIds: string[]): string {
+  return `SELECT id, version_number AS "versionNumber" FROM assignments WHERE id = ANY(${array([...new Set(assignmentIds)], text, 'uuid')})`;
 }
 
 export interface StateQuery {

@@ -297,6 +297,20 @@ describe('refusals', () => {
     expect(stale.body.error.code).toBe('assignment_closed');
   });
 
+  it('an answer kept offline over the close is refused once the student has opened their results after the close', async () => {
+    const assigned = await assignedLesson(t, submitLesson(), { opensAt: hoursFromNow(-48), dueAt: hoursFromNow(-1), lateUntil: null });
+    // The results page is the one place that may show answers after the close.
+    expect((await assigned.student.client.get(`/api/student/assignments/${assigned.assignmentId}/results`)).status).toBe(200);
+    const res = await submit(
+      assigned.student.client,
+      assigned.assignmentId,
+      answerBody(KEYS.choice, RIGHT_CHOICE, { answeredAt: hoursFromNow(-3) }),
+    );
+    expect(res.status).toBe(409);
+    expect(res.body.error).toMatchObject({ code: 'assignment_closed', message: expect.stringContaining('after you opened your results') });
+    expect(await rowsOf(assigned.assignmentId, assigned.student.id)).toHaveLength(0);
+  });
+
   it('the per-student rate limit refuses with 429 and Retry-After, saving nothing', async () => {
     const limited = await createTestApp({ SUBMIT_RATE_PER_MINUTE: '2' });
     try {

@@ -184,6 +184,19 @@ export function planBatch(items: Submission[], locked: Map<string, LockedProgres
       settle(refusal(new ConflictError(acceptance.code === 'not_open' ? 'assignment_not_open' : 'assignment_closed', acceptance.message)));
       return;
     }
+    // An answer kept offline over the close is taken on trust, unless the student has since opened
+    // their results, which may show the answers after the close.
+    if (acceptance.sentAfterReconnecting && pair.progress.resultsSeenAt && isClosed(ctx, pair.progress.resultsSeenAt)) {
+      settle(
+        refusal(
+          new ConflictError(
+            'assignment_closed',
+            'This answer reached the server after the lesson closed and after you opened your results, which can show the answers, so it was not saved.',
+          ),
+        ),
+      );
+      return;
+    }
     const label = checkpointLabel(checkpoint);
     const explanation = isExplanation(checkpoint, input.answer, tally.lastAnswer);
     if (!explanation) {

@@ -67,7 +67,7 @@ describe('GET /api/student/assignments/:assignmentId/results', () => {
       reveal: null,
       gradeUpdated: false,
     });
-    expect(at(CANARY_KEYS.numeric).prompt).toMatch(/^A flat coil of \d+ turns and radius [\d.]+ cm carries [\d.]+ A\./);
+    expect(at(CANARY_KEYS.numeric).prompt).toMatch(/^A flat coil of \d+ turns and radius [\d.]+\u00a0cm carries [\d.]+\u00a0A\./);
     // Seven scored checkpoints of one point; the text prediction is not scored.
     expect(results.score).toEqual({ earned: 0, possible: 7 });
     expect(results.assignment).toMatchObject({

@@ -140,8 +140,9 @@ describe('GET /api/student/assignments/:assignmentId/watch', () => {
     const res = await assigned.student.client.get(watchPath(assigned.assignmentId));
     const numeric = WatchViewDtoSchema.parse(res.body).view.checkpoints.find((c) => c.key === CANARY_KEYS.numeric);
     expect(numeric).toMatchObject({
-      prompt: 'A flat coil of 13 turns and radius 5.5 cm carries 1.5 A. What is the field at its centre?',
-      values: { N: '13', a: '5.5 cm', I: '1.5 A' },
+      // A drawn value keeps its unit on the same line (no-break space).
+      prompt: 'A flat coil of 13 turns and radius 5.5\u00a0cm carries 1.5\u00a0A. What is the field at its centre?',
+      values: { N: '13', a: '5.5\u00a0cm', I: '1.5\u00a0A' },
     });
   });
 
