@@ -48,17 +48,21 @@ describe('toStudentView', () => {
   it("fills numeric prompts with this student's values and writes the unit as the engine does", () => {
     const view = toStudentView(lesson([numeric({ askedUnit: 'uT' })]), { seed: 'student-1' });
     const values = drawnValuesFor(numeric(), 'student-1');
+    // A no-break space (U+00A0) between a value's number and its unit, so a narrow screen never wraps them apart.
+    const kept = (value: number | string | undefined) => String(value).replace(' ', '\u00a0');
     const shown = view.checkpoints[0];
     expect(shown?.kind === 'numeric' && shown.prompt).toBe(
-      `A coil of radius ${values.a} has ${values.N} turns and carries ${values.I}. Find the field at its centre.`,
+      `A coil of radius ${kept(values.a)} has ${kept(values.N)} turns and carries ${kept(values.I)}. Find the field at its centre.`,
     );
+    expect(shown?.kind === 'numeric' && shown.values).toEqual({ a: kept(values.a), N: kept(values.N), I: kept(values.I) });
     expect(shown?.kind === 'numeric' && shown.askedUnit).toBe('µT');
   });
 
   it('writes drawn values with a decimal comma in a comma locale', () => {
     const half = numeric({ prompt: 'r = {{a}}', variables: [{ name: 'a', min: 4.5, max: 4.5, step: 0.5, unit: 'cm', role: 'radius' }] });
     const view = toStudentView(lesson([half]), { seed: 's', locale: 'de-DE' });
-    expect(view.checkpoints[0]?.kind === 'numeric' && view.checkpoints[0].prompt).toBe('r = 4,5 cm');
+    expect(view.checkpoints[0]?.kind === 'numeric' && view.checkpoints[0].prompt).toBe('r = 4,5\u00a0cm');
+    expect(view.checkpoints[0]?.kind === 'numeric' && view.checkpoints[0].values).toEqual({ a: '4,5\u00a0cm' });
   });
 
   it('shuffles options per student and per checkpoint key, deterministically, only when asked', () => {

@@ -17,10 +17,14 @@ export interface StudentViewOptions {
   drawn?: Readonly<Record<string, VariableValues>>;
 }
 
-/** A drawn value as the student reads it: '4,5 cm' in a decimal-comma locale. */
+/** Between a drawn value's number and its unit: a no-break space, so a narrow screen never wraps '1.5 A' apart. */
+const NUMBER_UNIT_SPACE = '\u00a0';
+
+/** A drawn value as the student reads it: '4,5 cm' in a decimal-comma locale, the unit kept on the number's line. */
 function localValue(value: number | string, comma: boolean): string {
   const text = String(value);
-  return comma ? text.replace(/^(-?\d+)\.(\d)/, '$1,$2') : text;
+  const local = comma ? text.replace(/^(-?\d+)\.(\d)/, '$1,$2') : text;
+  return local.replace(/^(\S+)\s+/, `$1${NUMBER_UNIT_SPACE}`);
 }
 
 /** The prompt with this student's values, and the values as written; a draft whose variables cannot be drawn keeps its placeholders. */
@@ -118,5 +122,11 @@ export function toStudentView(content: LessonContent, options: StudentViewOption
   const chapters = [...content.chapters]
     .sort((a, b) => a.startMs - b.startMs)
     .map((c) => ({ key: c.key, title: c.title, startMs: c.startMs, endMs: c.endMs }));
-  return { title: content.settings.title, locale: options.locale ?? 'en-GB', safetyNotes: content.settings.safetyNotes, chapters, checkpoints };
+  return {
+    title: content.settings.title,
+    locale: options.locale ?? 'en-GB',
+    safetyNotes: content.settings.safetyNotes,
+    chapters,
+    checkpoints,
+  };
 }

@@ -65,9 +65,11 @@ describe('LessonPlayer kinds', { timeout: 20_000 }, () => {
     expect(fake.ms).toBe(9000);
     const dialog = screen.getByRole('dialog');
     expect(within(within(dialog).getByRole('region', { name: 'Your prediction' })).getByText('Stay put')).toBeInTheDocument();
-    expect(
-      within(within(dialog).getByRole('region', { name: 'What happened' })).getByText('The needle turned further.'),
-    ).toBeInTheDocument();
+    const happened = within(dialog).getByRole('region', { name: 'What happened' });
+    expect(within(happened).getByText('The needle turned further.')).toBeInTheDocument();
+    // The teacher's account of what happens, not a "why" as after a question.
+    expect(within(happened).getByText('The teacher’s account')).toBeInTheDocument();
+    expect(within(happened).queryByText('Why')).toBeNull();
     await user.type(within(dialog).getByRole('textbox', { name: /Explain the difference/ }), 'The field grew with the current.');
     await user.click(within(dialog).getByRole('button', { name: 'Send my explanation' }));
     expect(onAnswer).toHaveBeenLastCalledWith(
@@ -170,6 +172,9 @@ describe('LessonPlayer kinds', { timeout: 20_000 }, () => {
     expect(fake.isPaused).toBe(false);
     const aside = screen.getByRole('complementary', { name: 'Aside: Question aside1' });
     expect(within(aside).getByText(/the video keeps playing/)).toBeInTheDocument();
+    // In the column beside the video on wide screens (after it in reading order, for phones).
+    expect(aside.closest('[data-player-side]')).not.toBeNull();
+    expect(screen.getByTestId('video').compareDocumentPosition(aside) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
     await user.click(within(aside).getByRole('button', { name: /Close the aside/ }));
     expect(screen.queryByRole('complementary')).toBeNull();
   });

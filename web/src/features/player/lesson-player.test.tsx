@@ -42,12 +42,36 @@ describe('LessonPlayer', { timeout: 20_000 }, () => {
   it('holds the video until the safety notes are acknowledged', async () => {
     const { user, onEvent } = renderPlayer([mcAt('pause1', 5000)], vi.fn(), 'Keep the cell **away** from the magnet.');
     expect(screen.getByRole('heading', { name: 'Safety notes before you watch' })).toBeInTheDocument();
+    expect(screen.getByText(/Your school’s own safety rules and local regulations come first/)).toBeInTheDocument();
+    // No big play button under the "read the notes" text (player.css hides it on this class).
+    expect(fake.element).toHaveClass('pf-locked');
     play();
     expect(fake.isPaused).toBe(true);
     await user.click(screen.getByRole('button', { name: 'I have read the safety notes' }));
     expect(onEvent).toHaveBeenCalledWith({ type: 'safety-acknowledged' });
+    expect(fake.element).not.toHaveClass('pf-locked');
     play();
     expect(fake.isPaused).toBe(false);
+  });
+
+  it('does not repeat the line deferring to the school when the notes already say so', () => {
+    renderPlayer(
+      [mcAt('pause1', 5000)],
+      vi.fn(),
+      "Keep magnets apart. Follow your school's safety rules and local regulations, which take precedence over this note.",
+    );
+    expect(screen.getByText(/which take precedence over this note/)).toBeInTheDocument();
+    expect(screen.queryByText(/Your school’s own safety rules and local regulations come first/)).toBeNull();
+  });
+
+  it('opens the panel in the column beside the video, after the video in reading order', () => {
+    renderPlayer([mcAt('pause1', 2000)]);
+    play();
+    playTo(2100);
+    const dialog = screen.getByRole('dialog', { name: 'Question pause1' });
+    expect(dialog.closest('[data-player-side]')).not.toBeNull();
+    expect(screen.getByTestId('video').closest('[data-player-side]')).toBeNull();
+    expect(screen.getByTestId('video').compareDocumentPosition(dialog) & Node.DOCUMENT_POSITION_FOLLOWING).toBeTruthy();
   });
 
   it('stops at a pause pin, grades through the server, offers hints and retries, and resumes', async () => {
@@ -124,7 +148,10 @@ describe('LessonPlayer', { timeout: 20_000 }, () => {
 
     await user.click(screen.getByRole('radio', { name: 'Towards the coil' }));
     await user.click(screen.getByRole('button', { name: 'Check my answer' }));
-    await user.click(await screen.findByRole('button', { name: 'Continue' }));
+    const go = await screen.findByRole('button', { name: 'Continue' });
+    // Answered: the "answer before going past" message has done its work.
+    expect(screen.queryByText(/Answer this checkpoint before going past/)).toBeNull();
+    await user.click(go);
     act(() => fake.seekByViewer(20_000));
     expect(fake.ms).toBe(20_000);
   });

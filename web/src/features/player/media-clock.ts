@@ -16,8 +16,9 @@ export function clockOf(player: Player): MediaClock {
   const video = videoElementOf(player);
   const requestFrame =
     video && typeof video.requestVideoFrameCallback === 'function' && typeof video.cancelVideoFrameCallback === 'function'
-      ? (callback: (mediaMs: number) => void) => {
-          const handle = video.requestVideoFrameCallback?.((_now, metadata) => callback(metadata.mediaTime * 1000)) ?? 0;
+      ? (callback: (mediaMs: number, wallMs: number) => void) => {
+          // The time the callback runs, not the frame's: a late callback must show as a long gap.
+          const handle = video.requestVideoFrameCallback?.((_now, metadata) => callback(metadata.mediaTime * 1000, performance.now())) ?? 0;
           return () => video.cancelVideoFrameCallback?.(handle);
         }
       : null;

@@ -14,7 +14,7 @@ import {
   type PlayerEvent,
   type PlayerState,
 } from './logic/player-state';
-import { buildStops, type Stop } from './logic/stops';
+import { answerlessPinsBefore, buildStops, type Stop } from './logic/stops';
 import type { Player } from './video-player';
 
 /** What the player reports to its page (the watch page records some of it). */
@@ -182,9 +182,25 @@ export function useLessonPlayer({ view, onAnswer, onEvent, safetyAcknowledged = 
     [player, scheduler, stops, onStop],
   );
 
+  /**
+   * Go on where the student stopped last time. The notes and equation cards before that point were
+   * seen then (nothing is recorded for them), so they do not come back; answerable checkpoints
+   * follow the stored answers: an unanswered gate still holds, a skipped pause question is shown once.
+   */
+  const resumeAt = useCallback(
+    (ms: number) => {
+      if (!player || player.isDisposed() || !stateRef.current.started) return;
+      dispatch({ type: 'seen', ids: answerlessPinsBefore(view, stops, ms) });
+      player.currentTime(ms / 1000);
+      void Promise.resolve(player.play()).catch(() => undefined);
+    },
+    [player, view, stops, dispatch],
+  );
+
   return {
     state,
     stops,
+    resumeAt,
     player,
     setPlayer,
     scheduler,

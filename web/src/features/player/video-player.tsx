@@ -3,6 +3,7 @@ import { useCallback, useEffect, useLayoutEffect, useRef, useState } from 'react
 import videojs from 'video.js';
 import type Player from 'video.js/dist/types/player';
 import 'video.js/dist/video-js.css';
+import './player.css';
 import type { PlaybackDto } from '@core/contracts';
 import { Banner } from '@/components/ui/banner';
 import { Button } from '@/components/ui/button';
@@ -197,7 +198,7 @@ export function VideoPlayer({ playback, onReady, onRefresh, label = 'Video', cla
 
   return (
     <div className={cn('flex flex-col gap-3', className)}>
-      <div ref={containerRef} role="region" aria-label={label} data-player-ready={player ? 'true' : 'false'} />
+      <div ref={containerRef} role="region" aria-label={label} className="pf-player" data-player-ready={player ? 'true' : 'false'} />
       {stuck ? (
         <Banner tone="error" title="The video does not play">
           <p>Even with fresh links the browser could not play it. Check the connection, then try again.</p>

@@ -35,6 +35,7 @@ export function useWatchAnswers({ assignmentId, userId, schoolId, view, outbox }
   const [waitingAtStart, setWaitingAtStart] = useState<readonly OutboxEntry[] | null>(null);
   const [dismissed, setDismissed] = useState<ReadonlySet<string>>(() => new Set());
   const [replied, setReplied] = useState<Reported | null>(null);
+  const [gaveHere, setGaveHere] = useState(false);
 
   useEffect(() => {
     let live = true;
@@ -96,6 +97,7 @@ export function useWatchAnswers({ assignmentId, userId, schoolId, view, outbox }
 
   const onAnswer: AnswerSender = useCallback(
     async (key, answer, attempt) => {
+      setGaveHere(true);
       const idempotencyKey = newIdempotencyKey();
       const entry: OutboxEntry = {
         idempotencyKey,
@@ -119,9 +121,14 @@ export function useWatchAnswers({ assignmentId, userId, schoolId, view, outbox }
     setReplied((before) => newer(before, { completion, at }));
   }, []);
 
+  const anyGiven =
+    gaveHere || (waitingAtStart?.length ?? 0) > 0 || mine.length > 0 || Object.values(view?.book ?? {}).some((record) => record.used > 0);
+
   return {
     /** Null until the view and the device's queue are both read. */
     initialBook,
+    /** The student gave at least one answer here: recorded before, waiting on this device, or given on this page. */
+    anyGiven,
     onAnswer,
     arrivals,
     refusals,

@@ -39,8 +39,8 @@ export default function TeacherHomeRoute() {
           Your lessons
         </h2>
         <p>
-          Build lessons from your recordings by pinning checkpoints on the timeline, publish them, and assign a version to your classes
-          from the{' '}
+          Build lessons from your recordings by pinning checkpoints on the timeline, publish them, and assign a version to your classes from
+          the{' '}
           <Link to={paths.lessons.list(paths.teacher.home)} className="font-bold text-copper underline">
             Lessons page
           </Link>

@@ -8,7 +8,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import type { ResponseSubmit, ViewingReport } from '@core/contracts';
 import { paths } from '@/config/paths';
 import { FakeVideoPlayer } from '@/features/player/fake-video-player';
-import { mcAt } from '@/features/player/logic/test-view';
+import { mcAt, noteAt } from '@/features/player/logic/test-view';
 import { gradeOf } from '@/features/player/player-test-support';
 import type { VideoPlayerProps } from '@/features/player/video-player';
 import { closeOutboxes } from '@/features/watch/outbox/outbox-registry';
@@ -292,14 +292,71 @@ describe('watch page', { timeout: 30_000 }, () => {
     expect(screen.queryByText('An answer was not recorded: Question gate01 at 0:05.0')).toBeNull();
   });
 
-  it('offers to resume where the student stopped', async () => {
-    serve(watchViewOf([mcAt('pause1', 5000)], { progress: { resumeMs: 161_000, safetyAcknowledged: true } }));
+  it('offers to resume where the student stopped; notes before that point were seen, unanswered questions come once', async () => {
+    serve(watchViewOf([noteAt('note01', 3000), mcAt('pause1', 5000)], { progress: { resumeMs: 161_000, safetyAcknowledged: true } }));
     const { user } = renderApp(paths.student.watch(ASSIGNMENT_ID));
     await user.click(await screen.findByRole('button', { name: 'Resume at 02:41' }));
     expect(fake.ms).toBe(161_000);
     expect(screen.queryByRole('button', { name: 'Resume at 02:41' })).toBeNull();
-    // The unanswered pause checkpoint passed on the way is shown once.
-    expect(within(screen.getByRole('dialog')).getByText(/You moved past the checkpoint at 0:05\.0/)).toBeInTheDocument();
+    // The unanswered pause question passed on the way is shown once; the note before it is not shown again.
+    const dialog = screen.getByRole('dialog', { name: 'Question pause1' });
+    expect(within(dialog).getByText(/You moved past the checkpoint at 0:05\.0/)).toBeInTheDocument();
+    expect(screen.queryByRole('dialog', { name: 'Note note01' })).toBeNull();
+    expect(screen.getByRole('button', { name: /Note note01, done/ })).toBeInTheDocument();
+  });
+
+  it('from the beginning instead, the notes come again as the video reaches them', async () => {
+    serve(watchViewOf([noteAt('note01', 3000)], { progress: { resumeMs: 161_000, safetyAcknowledged: true } }));
+    const { user } = renderApp(paths.student.watch(ASSIGNMENT_ID));
+    await user.click(await screen.findByRole('button', { name: 'Start from the beginning' }));
+    await playerReady();
+    act(() => void fake.play());
+    act(() => fake.playTo(3100));
+    expect(screen.getByRole('dialog', { name: 'Note note01' })).toBeInTheDocument();
+  });
+
+  it('says "Done" in the header once a reply says the lesson is complete', async () => {
+    serve();
+    answersEndpoint(() =>
+      HttpResponse.json(
+        resultOf({
+          completion: completionOf({ requiredAnswered: 1, watchedShare: 0.95, done: true, completedAt: new Date().toISOString() }),
+        }),
+        {
+          status: 201,
+        },
+      ),
+    );
+    const { user } = renderApp(paths.student.watch(ASSIGNMENT_ID));
+    expect(await screen.findByText('In progress')).toBeInTheDocument();
+    await answerGate(user);
+    expect(await screen.findByText('Lesson complete')).toBeInTheDocument();
+    const header = screen.getByRole('heading', { level: 1 }).closest('header');
+    expect(header).not.toBeNull();
+    expect(within(header as HTMLElement).getByText('Done')).toBeInTheDocument();
+    expect(screen.queryByText('In progress')).toBeNull();
+  });
+
+  it('says "Saved" only once an answer was given; before that, that none was', async () => {
+    serve();
+    answersEndpoint(() => HttpResponse.json(resultOf(), { status: 201 }));
+    const { user } = renderApp(paths.student.watch(ASSIGNMENT_ID));
+    await playerReady();
+    const before = document.querySelector('[data-send-state]');
+    expect(before).toHaveAttribute('data-send-state', 'none');
+    expect(before).toHaveTextContent('No answers yet');
+    expect(before).not.toHaveTextContent('Saved');
+    await answerGate(user);
+    await waitFor(() => expect(document.querySelector('[data-send-state="saved"]')).toHaveTextContent('Saved'));
+  });
+
+  it('says "Saved" at once for answers recorded on an earlier visit', async () => {
+    const view = watchViewOf();
+    view.book = { gate01: { used: 1, answer: { kind: 'multiple-choice', optionIds: ['a'] }, grade: gradeOf({ correct: true, score: 1 }) } };
+    serve(view);
+    renderApp(paths.student.watch(ASSIGNMENT_ID));
+    await playerReady();
+    expect(document.querySelector('[data-send-state="saved"]')).toHaveTextContent('Saved');
   });
 
   it('reports the intervals played with the CSRF header and keepalive, on pause', async () => {

@@ -1,4 +1,4 @@
-import { useEffect, useState } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { useParams } from 'react-router-dom';
 import { CHECKPOINT_KIND_LABELS } from '@core/contracts';
 import { formatTime } from '@core/lessons/time-format';
@@ -9,7 +9,8 @@ import { Loading } from '@/components/ui/spinner';
 import { paths } from '@/config/paths';
 import { activeMembership } from '@/features/auth/api/get-me';
 import { useSignedInMe } from '@/features/auth/components/me-context';
-import { LessonPlayer, type LessonPlayerEvent } from '@/features/player/lesson-player';
+import { SchoolRulesLine } from '@/features/player/components/safety-notice';
+import { LessonPlayer, type LessonPlayerControls, type LessonPlayerEvent } from '@/features/player/lesson-player';
 import type { Player } from '@/features/player/video-player';
 import { useAcknowledgeSafety } from '@/features/watch/api/acknowledge-safety';
 import { useWatchView } from '@/features/watch/api/get-watch-view';
@@ -19,7 +20,7 @@ import { ResumeOffer } from '@/features/watch/components/resume-offer';
 import { SendStatus } from '@/features/watch/components/send-status';
 import { WatchHeader } from '@/features/watch/components/watch-header';
 import { WatchUnavailable } from '@/features/watch/components/watch-unavailable';
-import { revealNote } from '@/features/watch/logic/watch-text';
+import { currentState, revealNote } from '@/features/watch/logic/watch-text';
 import { useAnswerOutbox } from '@/features/watch/outbox/use-answer-outbox';
 import { useOnline } from '@/features/watch/use-online';
 import { useWatchAnswers } from '@/features/watch/use-watch-answers';
@@ -41,6 +42,7 @@ export default function WatchRoute() {
   const online = useOnline();
   const acknowledge = useAcknowledgeSafety(assignmentId);
   const [player, setPlayer] = useState<Player | null>(null);
+  const controls = useRef<LessonPlayerControls>(null);
   const [acknowledgedNow, setAcknowledgedNow] = useState(false);
   const [resumeAnswered, setResumeAnswered] = useState(false);
   const { reportCompletion } = answers;
@@ -88,6 +90,7 @@ export default function WatchRoute() {
   const acknowledged = data.progress.safetyAcknowledged || acknowledgedNow;
   const started = notes === '' || acknowledged;
   const resumeMs = data.progress.resumeMs;
+  const completion = answers.completion ?? data.progress.completion;
   const nameOf = (key: string) => {
     const checkpoint = data.view.checkpoints.find((c) => c.key === key);
     if (!checkpoint) return key;
@@ -103,10 +106,10 @@ export default function WatchRoute() {
     <>
       {back}
       <div className="flex flex-col gap-4">
-        <WatchHeader watch={data} clock={clock} resultsHref={resultsHref} />
+        <WatchHeader watch={data} state={currentState(data.assignment.state, completion)} clock={clock} resultsHref={resultsHref} />
         <div className="grid gap-3 md:grid-cols-2">
-          <SendStatus status={status} online={online} name={me.user.name} onRetry={() => outbox.retryNow()} />
-          <CompletionSummary completion={answers.completion ?? data.progress.completion} />
+          <SendStatus status={status} online={online} anyGiven={answers.anyGiven} name={me.user.name} onRetry={() => outbox.retryNow()} />
+          <CompletionSummary completion={completion} />
         </div>
         <RefusedAnswers items={answers.refused} nameOf={nameOf} onDismiss={answers.dismissRefused} />
         {acknowledge.isError ? (
@@ -119,9 +122,8 @@ export default function WatchRoute() {
             resumeMs={resumeMs}
             onResume={() => {
               setResumeAnswered(true);
-              // A seek like any other: an unanswered gate before that point still holds the video there.
-              player.currentTime(resumeMs / 1000);
-              void Promise.resolve(player.play()).catch(() => undefined);
+              // A seek like any other, except that notes and equation cards before the point count as seen.
+              controls.current?.resumeAt(resumeMs);
             }}
             onDismiss={() => setResumeAnswered(true)}
           />
@@ -130,12 +132,13 @@ export default function WatchRoute() {
           <details className="rounded-md border-l-4 border-copper bg-copper-soft px-4 py-2">
             <summary className="min-h-9 cursor-pointer py-1 font-bold">Safety notes (read before)</summary>
             <RichText markdown={notes} />
-            <p className="text-sm">Your school’s own safety rules and local regulations come first; follow them whenever they differ.</p>
+            <SchoolRulesLine notes={notes} />
           </details>
         ) : null}
         {answers.initialBook ? (
           <LessonPlayer
             key={assignmentId}
+            ref={controls}
             view={data.view}
             playback={data.playback}
             mode="watch"

@@ -24,19 +24,21 @@ export type CheckpointOverlayProps = {
   onTryAgain: () => void;
 };
 
-function reasonText(overlay: Overlay): string | null {
+/** Why the panel opened where it did; the gate's "answer first" goes once it is answered (or the answer is queued). */
+function reasonText(overlay: Overlay, answeredHere: boolean): string | null {
   const at = formatTime(overlay.stop.atMs);
-  if (overlay.reason === 'returned') return `Answer this checkpoint before going past ${at}. The video came back here.`;
+  if (overlay.reason === 'returned')
+    return answeredHere ? null : `Answer this checkpoint before going past ${at}. The video came back here.`;
   if (overlay.reason === 'passed') return `You moved past the checkpoint at ${at}; here it is before you go on.`;
   return null;
 }
 
-/** The panel a paused video shows at a pin or a reveal: over the video on wide screens, a sheet below it on phones. */
+/** The panel a paused video shows at a pin or a reveal: beside the video on wide screens, below it on phones. */
 export function CheckpointOverlay(props: CheckpointOverlayProps) {
   const { overlay, checkpoint, record, busy, sendError, headingRef, revealNote } = props;
   const answerable = 'attempts' in checkpoint;
   const isReveal = overlay.stop.phase === 'reveal';
-  const reason = reasonText(overlay);
+  const reason = reasonText(overlay, hasAnswered(record));
   const title = checkpoint.label.trim() || CHECKPOINT_KIND_LABELS[checkpoint.kind];
   const asking = overlay.phase === 'asking';
   const gateLocked = overlay.stop.behaviour === 'gate' && answerable && !hasAnswered(record);

@@ -71,7 +71,14 @@ export function GradePanel({ grade, showReveal, verdictLater = false, feedbackHi
   );
 }
 
-export function RevealText({ answer, explanation }: { answer: string; explanation: string }) {
+type RevealTextProps = {
+  answer: string;
+  explanation: string;
+  /** What the explanation is called: "Why" after a question; a prediction's reveal says what happened instead. */
+  explanationLabel?: string;
+};
+
+export function RevealText({ answer, explanation, explanationLabel = 'Why' }: RevealTextProps) {
   return (
     <div className="flex flex-col gap-2 rounded-md border border-line bg-surface px-3 py-2">
       {answer.trim() ? (
@@ -82,7 +89,7 @@ export function RevealText({ answer, explanation }: { answer: string; explanatio
       ) : null}
       {explanation.trim() ? (
         <div>
-          <p className="font-bold">Why</p>
+          <p className="font-bold">{explanationLabel}</p>
           <RichText markdown={explanation} />
         </div>
       ) : null}

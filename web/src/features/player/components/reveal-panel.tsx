@@ -44,8 +44,9 @@ export function RevealPanel({ checkpoint, record, busy, revealNote = null, onSub
   const explained = answer.explanation !== null;
   const send = () => onSubmit({ ...answer, explanation: explanation.trim() === '' ? null : explanation });
   return (
-    <div className="flex flex-col gap-4">
-      <div className="grid gap-3 md:grid-cols-2">
+    // Side by side only where the panel itself is wide enough (beside the video it is a narrow column).
+    <div className="@container flex flex-col gap-4">
+      <div className="grid gap-3 @md:grid-cols-2">
         <section aria-label="Your prediction" className="rounded-md border border-line-strong bg-surface px-3 py-2">
           <p className="font-bold">Your prediction</p>
           <RichText markdown={predictionText(checkpoint, answer)} />
@@ -59,7 +60,11 @@ export function RevealPanel({ checkpoint, record, busy, revealNote = null, onSub
             </p>
           ) : null}
           {reveal ? (
-            <RevealText answer={checkpoint.scored ? reveal.answer : ''} explanation={reveal.explanation} />
+            <RevealText
+              answer={checkpoint.scored ? reveal.answer : ''}
+              explanation={reveal.explanation}
+              explanationLabel="The teacher’s account"
+            />
           ) : heldBack ? (
             <p>{heldBack}</p>
           ) : (

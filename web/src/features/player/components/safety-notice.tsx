@@ -1,6 +1,16 @@
 import { RichText } from '@/components/rich-text/rich-text';
 import { Button } from '@/components/ui/button';
 import { AlertIcon } from '@/components/ui/icons';
+import { notesDeferToSchool } from '../logic/safety-deferral';
+
+/**
+ * The line deferring to the school's own rules, under the lesson's safety notes; left out when the
+ * notes already say so themselves (the studio's suggested cautions do), so it is not said twice.
+ */
+export function SchoolRulesLine({ notes }: { notes: string }) {
+  if (notesDeferToSchool(notes)) return null;
+  return <p className="text-sm">Your school’s own safety rules and local regulations come first; follow them whenever they differ.</p>;
+}
 
 /** The lesson's safety notes, acknowledged before the video can start. */
 export function SafetyNotice({ notes, onAcknowledge }: { notes: string; onAcknowledge: () => void }) {
@@ -14,7 +24,7 @@ export function SafetyNotice({ notes, onAcknowledge }: { notes: string; onAcknow
         Safety notes before you watch
       </h2>
       <RichText markdown={notes} />
-      <p className="text-sm">Your school’s own safety rules and local regulations come first; follow them whenever they differ.</p>
+      <SchoolRulesLine notes={notes} />
       <div>
         <Button size="lg" onClick={onAcknowledge} className="w-full sm:w-auto">
           I have read the safety notes

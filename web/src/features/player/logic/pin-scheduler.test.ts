@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { FakeClock } from './fake-clock';
+import { FakeClock, type FakeClockOptions } from './fake-clock';
 import { PinScheduler } from './pin-scheduler';
 import type { OverlayReason } from './player-state';
 import { buildStops, type Stop } from './stops';
 import { mcAt, viewOf } from './test-view';
 
-function setUp(checkpoints: Parameters<typeof viewOf>[0], options: { frames?: boolean; holding?: () => boolean } = {}) {
-  const clock = new FakeClock({ frames: options.frames });
+function setUp(checkpoints: Parameters<typeof viewOf>[0], options: FakeClockOptions & { holding?: () => boolean } = {}) {
+  const clock = new FakeClock(options);
   const done = new Set<string>();
   const reached: { id: string; reason: OverlayReason; atMs: number }[] = [];
   const scheduler = new PinScheduler(
@@ -49,8 +49,52 @@ describe('PinScheduler', () => {
     expect(clock.ms).toBe(5010);
     const pausedAt = clock.pausedAt[0] ?? Infinity;
     expect(pausedAt).toBeLessThanOrEqual(5010);
-    // Within one frame of media before the pin.
-    expect(5010 - pausedAt).toBeLessThanOrEqual((1000 / 30) * rate + 1);
+    expect(clock.maxPresentedMs).toBeLessThanOrEqual(5010);
+    // Callbacks on time, one per 1/30 s frame: paused within twice that gap of wall time (at the
+    // rate) before the pin, plus the frame it was checked on (hand-computed bound).
+    expect(5010 - pausedAt).toBeLessThanOrEqual(2 * (1000 / 30) * rate + (1000 / 30) * rate);
+  });
+
+  it('pauses earlier after late callbacks than after punctual ones', () => {
+    // Late callbacks early on only (within the remembered gaps), punctual ones near the pin.
+    const earliness = (rate: number, late: boolean) => {
+      const { clock } = setUp([mcAt('pause1', 1500)], {
+        frames: true,
+        fps: 24,
+        callbackDelay: (n) => (late && n < 8 && n % 3 === 1 ? 40 : 0),
+      });
+      clock.playbackRate = rate;
+      clock.play();
+      clock.advance(3000 / rate);
+      expect(clock.ms).toBe(1500);
+      return 1500 - (clock.pausedAt[0] ?? Infinity);
+    };
+    // Gaps of 82 ms against 42 ms (hand-computed from the fake's 24 fps frames and 40 ms delays).
+    expect(earliness(1, true)).toBeGreaterThan(earliness(1, false));
+    expect(earliness(2, true)).toBeGreaterThan(earliness(2, false));
+  });
+
+  // A loaded machine (hand-made pattern): most frame callbacks on time, some up to 60 ms late, as a
+  // busy main thread makes them. Frames go on reaching the screen meanwhile.
+  const LATE = [0, 4, 0, 28, 0, 0, 45, 2, 0, 18, 0, 60];
+  it.each([1, 2])('never shows a frame past the pin when frame callbacks come late, at %sx', (rate) => {
+    // Pins at many offsets from the 24 fps frame grid, so every phase of frame against pin is met.
+    for (let i = 0; i < 24; i += 1) {
+      const pin = 3000 + i * 7;
+      const { clock, reached } = setUp([mcAt('pause1', pin)], { frames: true, fps: 24, callbackDelay: (n) => LATE[n % LATE.length] ?? 0 });
+      clock.playbackRate = rate;
+      clock.play();
+      clock.advance(6000 / rate);
+      expect(
+        reached.map((r) => r.id),
+        `pin at ${pin} ms`,
+      ).toEqual(['pause1']);
+      expect(clock.maxPresentedMs, `a frame past the pin at ${pin} ms was shown`).toBeLessThanOrEqual(pin);
+      expect(clock.pausedAt[0] ?? Infinity, `paused past the pin at ${pin} ms`).toBeLessThanOrEqual(pin);
+      // Then moved exactly onto the pin.
+      expect(clock.ms).toBe(pin);
+      expect(clock.playing).toBe(false);
+    }
   });
 
   it('seeks back to the pin when playback overshot (no timer or frame came)', () => {

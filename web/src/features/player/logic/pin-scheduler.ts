@@ -1,6 +1,7 @@
 import { guardSeek } from './seek-guard';
 import type { OverlayReason } from './player-state';
-import { FRAME_WINDOW_MS, SAME_MOMENT_MS, stopAtFrame, timerDecision, wallMsUntil, type Stop } from './stops';
+import { CallbackGaps, frameMarginMs, pauseBeforePin } from './frame-margin';
+import { SAME_MOMENT_MS, timerDecision, type Stop } from './stops';
 
 /** The few things the scheduler needs from a video; `clockOf` adapts a video.js player. */
 export interface MediaClock {
@@ -9,8 +10,11 @@ export interface MediaClock {
   paused(): boolean;
   pause(): void;
   rate(): number;
-  /** requestVideoFrameCallback where the browser has it: called back with the presented frame's media time. */
-  requestFrame: ((callback: (mediaMs: number) => void) => () => void) | null;
+  /**
+   * requestVideoFrameCallback where the browser has it: called back with the presented frame's media
+   * time and the wall-clock time (ms, performance.now()) at which the callback ran.
+   */
+  requestFrame: ((callback: (mediaMs: number, wallMs: number) => void) => () => void) | null;
   on(event: 'play' | 'pause' | 'timeupdate' | 'seeking' | 'seeked' | 'ratechange', listener: () => void): () => void;
 }
 
@@ -34,20 +38,23 @@ const browserTimers: Timers = {
   clear: (handle) => clearTimeout(handle as ReturnType<typeof setTimeout>),
 };
 
-/** Before the first two frames give the real step: a 30 fps frame of media. */
-const DEFAULT_FRAME_MS = 1000 / 30;
-
 /**
- * Stops the video exactly at each pin. `timeupdate` comes only about four times a second, so a
- * timer aims at the pin from the time left and the playback rate, then (where the browser has it)
- * each presented frame is checked; the video is paused early and seeked to the pin, so the frame on
- * screen is the pinned one. If playback overshot anyway (a busy tab), it is seeked back. Seeks are
- * guarded: an unanswered gate cannot be passed, a jumped-over pause checkpoint is shown once.
+ * Stops the video exactly at each pin. `timeupdate` comes only about four times a second, so where
+ * the browser has requestVideoFrameCallback every presented frame is checked while playing: the
+ * video is paused as soon as it could reach the pin before the next callback (a margin that grows
+ * with the playback rate and with how late callbacks have come lately), then sought exactly onto the
+ * pin, so no frame past it reaches the screen and the frame left there is the pinned one. Without
+ * frame callbacks a timer aims at the pin from the time left and the rate. If playback overshot
+ * anyway (a tab in the background), it is sought back. Seeks are guarded: an unanswered gate cannot
+ * be passed, a jumped-over pause checkpoint is shown once.
  */
 export class PinScheduler {
   private timer: unknown = null;
   private cancelFrame: (() => void) | null = null;
-  private lastFrameMs: number | null = null;
+  /** The previous frame callback of this run of frames (media ms, wall ms). */
+  private lastFrame: { mediaMs: number; wallMs: number } | null = null;
+  /** Kept across runs: how late frame callbacks have come lately sets the early pause. */
+  private readonly gaps = new CallbackGaps();
   /** The media time before the latest seek began: where a seek is measured from. */
   private lastMs: number;
   private ownSeekMs: number | null = null;
@@ -87,16 +94,9 @@ export class PinScheduler {
     const now = this.clock.currentMs();
     const stop = this.upcoming(now);
     if (!stop) return;
-    const wall = wallMsUntil(now, stop.atMs, this.clock.rate());
-    if (this.clock.requestFrame && wall <= FRAME_WINDOW_MS) {
-      this.watchFrames(stop);
-      return;
-    }
-    if (this.clock.requestFrame) {
-      this.timer = this.timers.set(() => this.arm(), wall - FRAME_WINDOW_MS / 2);
-      return;
-    }
-    this.aimTimer(stop);
+    // Every frame, not only near the pin: the gaps measured on the way tell how early to pause.
+    if (this.clock.requestFrame) this.watchFrames(stop);
+    else this.aimTimer(stop);
   }
 
   private upcoming(fromMs: number): Stop | null {
@@ -119,14 +119,16 @@ export class PinScheduler {
   private watchFrames(stop: Stop): void {
     const request = this.clock.requestFrame;
     if (!request) return;
-    this.cancelFrame = request((mediaMs) => {
+    this.cancelFrame = request((mediaMs, wallMs) => {
       this.cancelFrame = null;
       const rate = this.clock.rate();
-      const observed = this.lastFrameMs === null ? null : mediaMs - this.lastFrameMs;
-      this.lastFrameMs = mediaMs;
-      const step = observed !== null && observed > 0 && observed < 250 * rate ? observed : DEFAULT_FRAME_MS * rate;
+      const last = this.lastFrame;
+      if (last) this.gaps.note(wallMs - last.wallMs, mediaMs - last.mediaMs, rate);
+      this.lastFrame = { mediaMs, wallMs };
       if (this.clock.paused() || !this.hooks.isActive(stop)) return this.arm();
-      if (stopAtFrame(mediaMs, step, stop.atMs)) this.reach(stop);
+      // The element's own time may be ahead of the reported frame when the callback ran late.
+      const position = Math.max(mediaMs, this.clock.currentMs());
+      if (pauseBeforePin(position, frameMarginMs(this.gaps.worst(), rate), stop.atMs)) this.reach(stop);
       else this.watchFrames(stop);
     });
   }
@@ -136,7 +138,7 @@ export class PinScheduler {
     this.timer = null;
     this.cancelFrame?.();
     this.cancelFrame = null;
-    this.lastFrameMs = null;
+    this.lastFrame = null;
   }
 
   private ownSeek(ms: number): void {
@@ -178,6 +180,8 @@ export class PinScheduler {
   }
 
   private onSeeking(): void {
+    // A jump in media time is not a late frame callback.
+    this.lastFrame = null;
     const to = this.clock.currentMs();
     if (this.ownSeekMs !== null && Math.abs(to - this.ownSeekMs) <= SAME_MOMENT_MS) {
       this.ownSeekMs = null;

@@ -107,4 +107,11 @@ describe('playerReducer', () => {
     );
     expect(state.overlay?.phase).toBe('graded');
   });
+
+  it('counts stops the student saw before as handled, once each', () => {
+    const state = run(initialPlayerState(false), { type: 'seen', ids: ['pause1', 'pause1'] }, { type: 'seen', ids: ['pause1'] });
+    expect(state.handled).toEqual(['pause1']);
+    expect(isStopDone(state, stop('pause1'))).toBe(true);
+    expect(isStopActive(state, stop('pause1'))).toBe(false);
+  });
 });

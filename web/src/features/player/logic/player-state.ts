@@ -30,6 +30,8 @@ export type PlayerEvent =
   | { type: 'skip' }
   | { type: 'continue'; answerable: boolean }
   | { type: 'dismiss-aside'; key: string }
+  /** Stops the student has seen before (those taking no answer, before the point they resume at). */
+  | { type: 'seen'; ids: readonly string[] }
   | { type: 'reset'; needsSafety: boolean };
 
 export function initialPlayerState(needsSafety: boolean): PlayerState {
@@ -101,6 +103,8 @@ export function playerReducer(state: PlayerState, event: PlayerEvent): PlayerSta
       return { ...state, overlay: null, handled: addOnce(state.handled, state.overlay.stop.id) };
     case 'dismiss-aside':
       return { ...state, asides: state.asides.filter((k) => k !== event.key), handled: addOnce(state.handled, event.key) };
+    case 'seen':
+      return { ...state, handled: event.ids.reduce(addOnce, state.handled) };
     case 'reset':
       return initialPlayerState(event.needsSafety);
   }

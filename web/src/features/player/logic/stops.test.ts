@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { buildStops, nextStop, revealId, stopAtFrame, timerDecision, TIMER_LEAD_MS, wallMsUntil } from './stops';
-import { mcAt, predictionAt, viewOf } from './test-view';
+import { answerlessPinsBefore, buildStops, nextStop, revealId, timerDecision, TIMER_LEAD_MS, wallMsUntil } from './stops';
+import { mcAt, noteAt, predictionAt, viewOf } from './test-view';
 
 describe('buildStops', () => {
   it('adds a reveal stop for a prediction and sorts by time', () => {
@@ -31,22 +31,13 @@ describe('nextStop', () => {
   });
 });
 
-describe('stopAtFrame', () => {
-  const frame = 1000 / 30;
-  it('stops on the frame whose successor would pass the pin', () => {
-    // Frames at 33.3 and 66.7 ms; a pin at 50 ms lies inside the 33.3 ms frame.
-    expect(stopAtFrame(0, frame, 50)).toBe(false);
-    expect(stopAtFrame(frame, frame, 50)).toBe(true);
-  });
-  it('waits for a pin exactly on the next frame, then stops on it', () => {
-    expect(stopAtFrame(frame, frame, 2 * frame)).toBe(false);
-    expect(stopAtFrame(2 * frame, frame, 2 * frame)).toBe(true);
-  });
-  it('stops when already past the pin', () => {
-    expect(stopAtFrame(80, frame, 50)).toBe(true);
-  });
-  it('takes the playback rate into the step (2x doubles the media per frame)', () => {
-    expect(stopAtFrame(0, 2 * frame, 50)).toBe(true);
+describe('answerlessPinsBefore', () => {
+  it('lists the notes and equation cards before the point, not answerable ones nor those at or after it', () => {
+    const view = viewOf([noteAt('note01', 1000), mcAt('pause1', 2000), noteAt('gnote1', 3000, 'gate'), noteAt('note02', 5000)]);
+    const stops = buildStops(view);
+    expect(answerlessPinsBefore(view, stops, 5000)).toEqual(['note01', 'gnote1']);
+    expect(answerlessPinsBefore(view, stops, 5002)).toEqual(['note01', 'gnote1', 'note02']);
+    expect(answerlessPinsBefore(view, stops, 0)).toEqual([]);
   });
 });
 

@@ -56,19 +56,8 @@ export function nextStop(stops: readonly Stop[], fromMs: number, isActive: (stop
   return null;
 }
 
-/**
- * Frame by frame: stop now when this frame is at the pin already or the next one (`stepMs` of media
- * later) would be past it, so the frame left on screen is the one holding the pin time.
- */
-export function stopAtFrame(mediaMs: number, stepMs: number, stopMs: number): boolean {
-  if (mediaMs >= stopMs - SAME_MOMENT_MS) return true;
-  return mediaMs + stepMs > stopMs + SAME_MOMENT_MS;
-}
-
 /** How early a timer aims before the pin (wall-clock ms): timers run late, never early. */
 export const TIMER_LEAD_MS = 40;
-/** Closer than this (wall-clock ms) to a pin, switch from a timer to per-frame checks. */
-export const FRAME_WINDOW_MS = 400;
 
 /** Wall-clock milliseconds from now until the media reaches `stopMs` at `rate`. */
 export function wallMsUntil(currentMs: number, stopMs: number, rate: number): number {
@@ -84,6 +73,15 @@ export function timerDecision(currentMs: number, stopMs: number, rate: number): 
   const wall = wallMsUntil(currentMs, stopMs, rate);
   if (wall <= TIMER_LEAD_MS * 1.5) return { stop: true };
   return { stop: false, waitMs: wall - TIMER_LEAD_MS };
+}
+
+/**
+ * The pins of checkpoints that take no answer (equation cards, notes) lying before `ms`: on resuming
+ * there, the student saw them last time, and nothing on the server says so (answers do).
+ */
+export function answerlessPinsBefore(view: StudentLessonView, stops: readonly Stop[], ms: number): string[] {
+  const answerless = new Set(view.checkpoints.filter((c) => !('attempts' in c)).map((c) => c.key));
+  return stops.filter((s) => s.phase === 'pin' && answerless.has(s.key) && s.atMs < ms - SAME_MOMENT_MS).map((s) => s.id);
 }
 
 export function checkpointAt(view: StudentLessonView, key: string): StudentCheckpoint | undefined {

@@ -18,6 +18,16 @@ export const mcAt = (key: string, atMs: number, behaviour: StudentCheckpoint['be
   allowSeveral: false,
 });
 
+export const noteAt = (key: string, atMs: number, behaviour: StudentCheckpoint['behaviour'] = 'pause'): StudentCheckpoint => ({
+  key,
+  atMs,
+  label: `Note ${key}`,
+  behaviour,
+  kind: 'note',
+  tone: 'remark',
+  body: 'Watch the needle as the switch closes.',
+});
+
 export const predictionAt = (key: string, atMs: number, revealAtMs: number): StudentCheckpoint => ({
   key,
   atMs,

@@ -7,6 +7,8 @@ import type { HoldReason, OutboxStatus } from '../outbox/answer-outbox';
 type SendStatusProps = {
   status: OutboxStatus;
   online: boolean;
+  /** At least one answer was given here (recorded or waiting): until then nothing is called saved. */
+  anyGiven: boolean;
   /** The signed-in student's name, for the held messages. */
   name: string;
   onRetry: () => void;
@@ -26,11 +28,13 @@ function heldText(reason: HoldReason, waiting: string, name: string): string {
   }
 }
 
+const HOW_ANSWERS_GO = 'Each answer is recorded as you give it. On a bad connection it is kept on this device until it gets through.';
+
 /**
- * Where the answers are, said honestly: all recorded ("Saved"), one on its way ("Sending…"), or kept
- * on this device until the connection (or the right sign-in) is back, with how many.
+ * Where the answers are, said honestly: none given yet, all recorded ("Saved"), one on its way
+ * ("Sending…"), or kept on this device until the connection (or the right sign-in) is back, with how many.
  */
-export function SendStatus({ status, online, name, onRetry, className }: SendStatusProps) {
+export function SendStatus({ status, online, anyGiven, name, onRetry, className }: SendStatusProps) {
   const waiting = plural(status.unsent, 'answer');
   let tone: 'ok' | 'busy' | 'wait' = 'ok';
   let title: string;
@@ -40,9 +44,12 @@ export function SendStatus({ status, online, name, onRetry, className }: SendSta
     tone = 'wait';
     title = `Not sent (${waiting})`;
     detail = heldText(status.held, plural(status.unsent, 'answer is', 'answers are'), name);
+  } else if (status.unsent === 0 && !anyGiven) {
+    title = 'No answers yet';
+    detail = HOW_ANSWERS_GO;
   } else if (status.unsent === 0) {
     title = 'Saved';
-    detail = 'Each answer is recorded as you give it. On a bad connection it is kept on this device until it gets through.';
+    detail = HOW_ANSWERS_GO;
   } else if (status.state === 'sending') {
     tone = 'busy';
     title = 'Sending…';
@@ -62,7 +69,7 @@ export function SendStatus({ status, online, name, onRetry, className }: SendSta
     <div
       role="status"
       aria-live="polite"
-      data-send-state={status.unsent === 0 ? 'saved' : status.state}
+      data-send-state={status.unsent > 0 ? status.state : anyGiven ? 'saved' : 'none'}
       className={cn(
         'flex flex-wrap items-start gap-x-3 gap-y-1 rounded-md border-l-4 px-3 py-2',
         tone === 'wait' ? 'border-copper bg-copper-soft' : 'border-teal bg-teal-soft',

@@ -1,16 +1,21 @@
 import { Link } from 'react-router-dom';
-import type { WatchViewDto } from '@core/contracts';
+import type { StudentAssignmentState, WatchViewDto } from '@core/contracts';
 import { Badge } from '@/components/ui/badge';
 import { AlertIcon, CheckIcon, InfoIcon } from '@/components/ui/icons';
 import type { SchoolClock } from '@/lib/format';
 import { STATE_WORDS, closesAtOf, feedbackNote, formatSchoolTime, zoneName } from '../logic/watch-text';
 
-type WatchHeaderProps = { watch: WatchViewDto; clock: SchoolClock; resultsHref: string };
+type WatchHeaderProps = {
+  watch: WatchViewDto;
+  /** The state now (the view's, or "done" since a later reply said so). */
+  state: StudentAssignmentState;
+  clock: SchoolClock;
+  resultsHref: string;
+};
 
 /** The assignment's facts: lesson, class, due time in school time, state in words and an icon, and the results link. */
-export function WatchHeader({ watch, clock, resultsHref }: WatchHeaderProps) {
+export function WatchHeader({ watch, state, clock, resultsHref }: WatchHeaderProps) {
   const { assignment } = watch;
-  const state = assignment.state;
   const Icon = state === 'done' ? CheckIcon : state === 'late' || state === 'closed' ? AlertIcon : InfoIcon;
   const tone = state === 'done' ? 'success' : state === 'late' ? 'copper' : 'neutral';
   const zone = zoneName(assignment.dueAt, clock);

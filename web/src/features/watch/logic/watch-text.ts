@@ -1,4 +1,4 @@
-import type { StudentAssignmentState, WatchViewDto } from '@core/contracts';
+import type { CompletionDto, StudentAssignmentState, WatchViewDto } from '@core/contracts';
 import type { SchoolClock } from '@/lib/format';
 
 function format(iso: string, clock: SchoolClock, options: Intl.DateTimeFormatOptions): string {
@@ -74,4 +74,12 @@ export function revealNote(view: WatchViewDto, clock: SchoolClock): string | nul
     case 'never':
       return 'Answers and explanations are not shown for this lesson.';
   }
+}
+
+/**
+ * The state the page header shows: the server's as the page loaded, until a later reply (an answer's
+ * or a viewing report's) says the lesson is complete; done wins, as on the student's home.
+ */
+export function currentState(loaded: StudentAssignmentState, completion: CompletionDto): StudentAssignmentState {
+  return completion.done ? 'done' : loaded;
 }
