@@ -56,7 +56,18 @@ function withQuery(path: string, query?: Query): string {
   return search ? `${path}?${search}` : path;
 }
 
-async function send(method: Method, url: string, body?: unknown, token?: string): Promise<Response> {
+/**
+ * One request with the token given (no refresh on a mismatch); `keepalive` lets it outlive the page.
+ * Failures are ApiErrors (status 0 for no connection). Most callers want `apiClient`, which also
+ * refreshes the CSRF token; the answer queue must not (a changed session holds its answers back).
+ */
+export async function send(
+  method: Method,
+  url: string,
+  body?: unknown,
+  token?: string,
+  options: { keepalive?: boolean } = {},
+): Promise<Response> {
   const headers: Record<string, string> = { Accept: 'application/json' };
   if (body !== undefined) headers['Content-Type'] = 'application/json';
   if (token) headers['X-CSRF-Token'] = token;
@@ -67,6 +78,7 @@ async function send(method: Method, url: string, body?: unknown, token?: string)
       headers,
       credentials: 'same-origin',
       body: body === undefined ? undefined : JSON.stringify(body),
+      keepalive: options.keepalive === true,
     });
   } catch {
     throw new ApiError(0, 'network_error', 'Pinfield could not reach its server. Check your network connection and try again.');
@@ -93,7 +105,8 @@ async function toApiError(response: Response): Promise<ApiError> {
   );
 }
 
-async function readBody<S extends z.ZodType>(response: Response, schema: S): Promise<z.output<S>> {
+/** The JSON reply read with its contract; a reply of another shape is an ApiError naming where it went wrong. */
+export async function readBody<S extends z.ZodType>(response: Response, schema: S): Promise<z.output<S>> {
   let json: unknown;
   try {
     json = await response.json();

@@ -1,12 +1,10 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { randomUUID } from 'node:crypto';
-import { multipleChoice } from '@core/lessons/fixtures.test-support';
-import type { Checkpoint } from '@core/contracts';
 import { createTestApp, type TestApp } from '../../../test/test-app';
 import { buildClass, buildSchool, enrol } from '../../../test/factories';
 import { deleteSchoolObjects } from '../uploads/uploads.test-support';
 import { member, type Member } from '../lessons/lessons.test-support';
-import { assign, assignmentBody, choose, publishedLesson, publishNext } from './assignments.test-support';
+import { assign, assignmentBody, choose, FIXED_NEEDLE, publishedLesson, publishNext, SLIPPED_NEEDLE } from './assignments.test-support';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -18,22 +16,8 @@ afterAll(async () => {
 });
 
 // Version 1 marks the wrong option right; version 2 corrects it.
-const NEEDLE = multipleChoice({
-  atMs: 2_000,
-  label: 'Needle direction',
-  options: [
-    { id: 'a', text: 'Clockwise', correct: true, feedback: '' },
-    { id: 'b', text: 'Anticlockwise', correct: false, feedback: '' },
-  ],
-  shuffle: false,
-});
-const FIXED: Checkpoint = {
-  ...NEEDLE,
-  options: [
-    { id: 'a', text: 'Clockwise', correct: false, feedback: '' },
-    { id: 'b', text: 'Anticlockwise', correct: true, feedback: '' },
-  ],
-};
+const NEEDLE = SLIPPED_NEEDLE;
+const FIXED = FIXED_NEEDLE;
 
 describe('a move racing students’ answers', () => {
   it('never deadlocks, and every answer ends graded by the corrected version', async () => {

@@ -1,11 +1,21 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { AssignmentMovedDtoSchema, type Checkpoint, type CheckpointGradeDto } from '@core/contracts';
-import { multipleChoice, numeric, shortText } from '@core/lessons/fixtures.test-support';
+import { numeric, shortText } from '@core/lessons/fixtures.test-support';
 import { Client, createTestApp, type TestApp } from '../../../test/test-app';
 import { buildClass, buildDepartment, buildSchool, enrol } from '../../../test/factories';
 import { deleteSchoolObjects } from '../uploads/uploads.test-support';
 import { member, type Member } from '../lessons/lessons.test-support';
-import { assign, assignmentBody, choose, publishedLesson, publishNext, storeValues, submitAnswer } from './assignments.test-support';
+import {
+  assign,
+  assignmentBody,
+  choose,
+  FIXED_NEEDLE,
+  publishedLesson,
+  publishNext,
+  SLIPPED_NEEDLE,
+  storeValues,
+  submitAnswer,
+} from './assignments.test-support';
 
 let t: TestApp;
 beforeAll(async () => {
@@ -17,15 +27,7 @@ afterAll(async () => {
 });
 
 // Version 1 as the teacher first published it, with two slips: the wrong option marked right, and 2x for "three rods".
-const NEEDLE = multipleChoice({
-  atMs: 2_000,
-  label: 'Needle direction',
-  options: [
-    { id: 'a', text: 'Clockwise', correct: true, feedback: '' },
-    { id: 'b', text: 'Anticlockwise', correct: false, feedback: '' },
-  ],
-  shuffle: false,
-});
+const NEEDLE = SLIPPED_NEEDLE;
 const RODS = numeric({
   atMs: 4_000,
   label: 'Three rods',
@@ -38,13 +40,7 @@ const RODS = numeric({
 const LAW = shortText({ atMs: 6_000, label: 'The law' });
 
 // Version 2 corrects both; the drawn range changes too, so grading with fresh draws instead of the stored '4 cm' would show.
-const NEEDLE_FIXED: Checkpoint = {
-  ...NEEDLE,
-  options: [
-    { id: 'a', text: 'Clockwise', correct: false, feedback: '' },
-    { id: 'b', text: 'Anticlockwise', correct: true, feedback: 'Yes: seen from above, the current circulates anticlockwise.' },
-  ],
-};
+const NEEDLE_FIXED = FIXED_NEEDLE;
 const RODS_FIXED: Checkpoint = {
   ...RODS,
   expected: 'x*3',

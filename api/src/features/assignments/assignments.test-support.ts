@@ -4,6 +4,7 @@ import type { Knex } from 'knex';
 import type { AssignmentDto, Checkpoint, CheckpointAnswer, LessonContent, LessonDto, ResponseResultDto } from '@core/contracts';
 import { instantToLocal } from '@core/assignments';
 import type { VariableValues } from '@core/physics/units/types';
+import { multipleChoice } from '@core/lessons/fixtures.test-support';
 import type { Client, TestApp } from '../../../test/test-app';
 import { createLesson, readyRecording, saveDraft, type Member } from '../lessons/lessons.test-support';
 
@@ -119,3 +120,23 @@ export async function storeValues(
     values: JSON.stringify(values),
   });
 }
+
+/** A question published with a slip (the wrong option marked right), for the move tests. */
+export const SLIPPED_NEEDLE = multipleChoice({
+  atMs: 2_000,
+  label: 'Needle direction',
+  options: [
+    { id: 'a', text: 'Clockwise', correct: true, feedback: '' },
+    { id: 'b', text: 'Anticlockwise', correct: false, feedback: '' },
+  ],
+  shuffle: false,
+});
+
+/** The same question corrected in the next version (same key). */
+export const FIXED_NEEDLE: Checkpoint = {
+  ...SLIPPED_NEEDLE,
+  options: [
+    { id: 'a', text: 'Clockwise', correct: false, feedback: '' },
+    { id: 'b', text: 'Anticlockwise', correct: true, feedback: 'Yes: seen from above, the current circulates anticlockwise.' },
+  ],
+};

@@ -2,7 +2,8 @@ import { ViewingResultDtoSchema, type ViewingBeacon, type ViewingReport, type Vi
 import { isApiError } from '@/lib/api-client';
 import { serverClock } from '../server-clock';
 import { assignmentApi } from './paths';
-import { postWithToken, readReply } from './post-with-token';
+import { readBody } from '@/lib/api-client';
+import { postWithToken } from './post-with-token';
 import type { SessionToken } from './session-token';
 
 /** Sends the intervals watched, with `keepalive` so a report made as the page goes away still arrives. */
@@ -18,7 +19,7 @@ export async function postViewing(assignmentId: string, report: ViewingReport, s
     if (now.kind !== 'signed-in' || now.userId !== session.userId) throw error;
     response = await postWithToken(url, report, session.current(), { keepalive: true });
   }
-  const result = await readReply(response, ViewingResultDtoSchema);
+  const result = await readBody(response, ViewingResultDtoSchema);
   serverClock.observe(result.serverTime);
   return result;
 }

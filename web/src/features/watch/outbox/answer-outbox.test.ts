@@ -117,6 +117,23 @@ describe('AnswerOutbox', () => {
     expect(outbox.status()).toMatchObject({ unsent: 0, state: 'idle' });
   });
 
+  it('goes on without the device store when its first read never answers, and takes the entries if they come late', async () => {
+    const store = new MemoryStore();
+    const waiting = entry();
+    store.rows.set(waiting.idempotencyKey, waiting);
+    let answer: (rows: OutboxEntry[]) => void = () => undefined;
+    store.list = () => new Promise<OutboxEntry[]>((resolve) => (answer = resolve));
+    const { timers, outbox } = setUp({ store });
+    const loaded = outbox.load();
+    timers.advance(4000);
+    await loaded;
+    expect(outbox.status()).toMatchObject({ deviceStorage: false, unsent: 0 });
+    answer([waiting]);
+    await settle();
+    expect(outbox.pendingFor(waiting.assignmentId)).toEqual([waiting]);
+    expect(outbox.status()).toMatchObject({ deviceStorage: true, unsent: 1 });
+  });
+
   it('queues an answer when the connection fails, retries with backoff, and reports the grade when it arrives', async () => {
     const { store, timers, send, outbox, events } = setUp();
     send.mockRejectedValueOnce(offline()).mockRejectedValueOnce(offline()).mockResolvedValueOnce(result());

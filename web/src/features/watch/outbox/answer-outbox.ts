@@ -36,6 +36,8 @@ export type OutboxDeps = {
   now?: () => number;
   /** How long a new answer waits for its reply before the page is told it is queued (a slow connection). */
   replyWaitMs?: number;
+  /** How long the first read of the device's store may take before the page goes on without it. */
+  storeWaitMs?: number;
 };
 
 type Waiter = { resolve(outcome: SubmitOutcome): void; reject(error: unknown): void; durable: boolean; timer: unknown };
@@ -84,6 +86,7 @@ export class AnswerOutbox {
   private readonly random: () => number;
   private readonly now: () => number;
   private readonly replyWaitMs: number;
+  private readonly storeWaitMs: number;
   private disposed = false;
 
   constructor(
@@ -94,6 +97,7 @@ export class AnswerOutbox {
     this.random = deps.random ?? Math.random;
     this.now = deps.now ?? Date.now;
     this.replyWaitMs = deps.replyWaitMs ?? 8000;
+    this.storeWaitMs = deps.storeWaitMs ?? 4000;
   }
 
   /** Reads what earlier pages left on this device (once). */
@@ -109,17 +113,47 @@ export class AnswerOutbox {
 
   /** Entries of this student written by other tabs since: add them behind the ones known here. */
   private async merge(): Promise<void> {
-    let stored: OutboxEntry[];
+    // A store that never answers (an IndexedDB open left waiting by a page that was navigated away
+    // mid-upgrade) must not hold the page: it goes on as without storage, and takes the read if it comes.
+    const read = this.deps.store.list(this.userId);
+    let stored: OutboxEntry[] | 'late';
     try {
-      stored = await this.deps.store.list(this.userId);
+      stored = await new Promise<OutboxEntry[] | 'late'>((resolve, reject) => {
+        const timer = this.timers.set(() => resolve('late'), this.storeWaitMs);
+        read.then(
+          (rows) => {
+            this.timers.clear(timer);
+            resolve(rows);
+          },
+          (error: unknown) => {
+            this.timers.clear(timer);
+            reject(error instanceof Error ? error : new Error(String(error)));
+          },
+        );
+      });
     } catch {
       this.update({ deviceStorage: false });
       return;
     }
+    if (stored === 'late') {
+      this.update({ deviceStorage: false });
+      void read.then(
+        (rows) => {
+          this.add(rows);
+          this.update({ deviceStorage: true });
+        },
+        () => undefined,
+      );
+      return;
+    }
+    this.add(stored);
+    this.update({});
+  }
+
+  private add(stored: readonly OutboxEntry[]): void {
     const known = new Set([...this.finished, ...this.queue.map((entry) => entry.idempotencyKey)]);
     for (const entry of stored) if (!known.has(entry.idempotencyKey)) this.queue.push(entry);
     this.queue.sort((a, b) => a.queuedAt - b.queuedAt);
-    this.update({});
   }
 
   status(): OutboxStatus {
